@@ -1,0 +1,157 @@
+// Reading and writing networks: the JSON network file, and imported IEEE Common Format cases.
+using System.Text;
+using System.Text.Json;
+using System.Text.Json.Serialization.Metadata;
+using System.Text.RegularExpressions;
+using Study.Core.Model;
+
+namespace Study.Core.Io;
+
+/// <summary>
+/// Reads a network from either format (recognised by content, not by file name) and writes the
+/// network file with stable key order and two-space indentation.
+/// </summary>
+public static partial class NetworkFile
+{
+    private static readonly JsonSerializerOptions Options = new(NetworkJsonContext.Default.Options)
+    {
+        TypeInfoResolver = NetworkJsonContext.Default.WithAddedModifier(OmitInServiceWhenTrue),
+    };
+
+    private static JsonTypeInfo<Network> NetworkInfo => (JsonTypeInfo<Network>)Options.GetTypeInfo(typeof(Network));
+
+    /// <summary>Reads a network file or an IEEE Common Format case from disk.</summary>
+    public static Network Read(string path)
+    {
+        string text;
+        try
+        {
+            text = File.ReadAllText(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException($"cannot read the file: {e.Message}", path);
+        }
+        return Parse(text, path);
+    }
+
+    /// <summary>Parses text in either format; <paramref name="fileName"/> is used in messages only.</summary>
+    public static Network Parse(string text, string? fileName = null)
+    {
+        string body = text.TrimStart('\uFEFF', ' ', '\t', '\r', '\n');
+        if (body.StartsWith('{')) return ParseJson(text, fileName);
+        if (text.Contains("BUS DATA FOLLOWS", StringComparison.Ordinal)) return CommonFormatReader.Parse(text, fileName);
+        throw new InputException(
+            "not a network file (a JSON object) nor an IEEE Common Format case (no 'BUS DATA FOLLOWS' section)",
+            fileName, 1, 1);
+    }
+
+    public static string ToJson(Network network) => JsonSerializer.Serialize(network, NetworkInfo) + "\n";
+
+    /// <summary>Writes the network file atomically (temporary file, flush, rename).</summary>
+    public static void Write(Network network, string path) => AtomicFile.WriteAllText(path, ToJson(network));
+
+    private static Network ParseJson(string text, string? fileName)
+    {
+        byte[] utf8 = Encoding.UTF8.GetBytes(text.TrimStart('\uFEFF'));
+        Network? network;
+        try
+        {
+            network = JsonSerializer.Deserialize(utf8, NetworkInfo);
+        }
+        catch (JsonException e)
+        {
+            throw Translate(e, fileName);
+        }
+        if (network is null) throw new InputException("the file holds 'null', not a network", fileName, 1, 1);
+        if (network.Format != Network.FormatName)
+            throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName);
+        if (network.Version > Network.CurrentVersion)
+            throw new InputException(
+                $"file version {network.Version} is newer than this program reads ({Network.CurrentVersion})", fileName);
+        return network with { Source = new SourceMap(fileName, ElementLines(utf8)) };
+    }
+
+    /// <summary>Rewrites a serializer message into one that names the key, the line and the column.</summary>
+    private static InputException Translate(JsonException e, string? fileName)
+    {
+        int? line = e.LineNumber is long l ? (int)l + 1 : null;
+        int? column = e.BytePositionInLine is long c ? (int)c + 1 : null;
+        string path = e.Path ?? "$";
+        string message = e.Message;
+        Match unknown = UnknownKey().Match(message);
+        Match missing = MissingKeys().Match(message);
+        if (unknown.Success)
+            message = $"unknown key '{unknown.Groups[1].Value}' at {path}";
+        else if (missing.Success)
+            message = $"missing required key(s) {missing.Groups[1].Value} in the object ending at {path}";
+        else if (message.Contains("could not be converted", StringComparison.Ordinal))
+            message = $"wrong type of value at {path}";
+        else
+        {
+            int cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+            message = $"JSON syntax: {(cut > 0 ? message[..cut] : message)}";
+        }
+        return new InputException(message, fileName, line, column);
+    }
+
+    [GeneratedRegex("The JSON property '([^']*)' could not be mapped")]
+    private static partial Regex UnknownKey();
+
+    [GeneratedRegex("missing required properties including: (.*)\\.?$", RegexOptions.Singleline)]
+    private static partial Regex MissingKeys();
+
+    /// <summary>Finds the line of each element object in the top-level arrays, keyed as <see cref="SourceMap.Key"/>.</summary>
+    private static Dictionary<string, int> ElementLines(byte[] utf8)
+    {
+        var lines = new Dictionary<string, int>();
+        var reader = new Utf8JsonReader(utf8, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip });
+        string? array = null;
+        int objectStartLine = 0;
+        while (reader.Read())
+        {
+            if (reader.CurrentDepth == 1 && reader.TokenType == JsonTokenType.PropertyName)
+                array = reader.GetString();
+            else if (reader.CurrentDepth == 2 && reader.TokenType == JsonTokenType.StartObject)
+                objectStartLine = LineAt(utf8, reader.TokenStartIndex);
+            else if (reader.CurrentDepth == 3 && reader.TokenType == JsonTokenType.PropertyName
+                     && (reader.ValueTextEquals("id") || reader.ValueTextEquals("name"))
+                     && FamilyOfArray(array) is ElementFamily family)
+            {
+                bool isId = reader.ValueTextEquals("id");
+                reader.Read();
+                if (reader.TokenType == JsonTokenType.String && (isId || family == ElementFamily.Scenario))
+                    lines.TryAdd(SourceMap.Key(family, reader.GetString()!), objectStartLine);
+            }
+        }
+        return lines;
+    }
+
+    private static int LineAt(byte[] utf8, long offset)
+    {
+        int line = 1;
+        for (long i = 0; i < offset; i++) if (utf8[i] == (byte)'\n') line++;
+        return line;
+    }
+
+    private static ElementFamily? FamilyOfArray(string? array) => array switch
+    {
+        "buses" => ElementFamily.Bus,
+        "supplies" or "generators" => ElementFamily.Source,
+        "lines" or "transformers" or "threeWindingTransformers" => ElementFamily.Branch,
+        "loads" or "shunts" => ElementFamily.LoadOrShunt,
+        "breakers" => ElementFamily.Breaker,
+        "scenarios" => ElementFamily.Scenario,
+        _ => null,
+    };
+
+    /// <summary>In service is the default; only <c>"inService": false</c> is written, to keep files short.</summary>
+    private static void OmitInServiceWhenTrue(JsonTypeInfo info)
+    {
+        foreach (JsonPropertyInfo property in info.Properties)
+        {
+            if (property.Name == "inService" && property.PropertyType == typeof(bool))
+                property.ShouldSerialize = (_, value) => value is false;
+        }
+    }
+}

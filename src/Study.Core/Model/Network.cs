@@ -1,0 +1,44 @@
+// The whole network as the engineer entered it: engineering units, immutable.
+namespace Study.Core.Model;
+
+/// <summary>
+/// A network in engineering units, as read from a network file or an imported case. Immutable:
+/// edits make a new instance with a <c>with</c> expression.
+/// </summary>
+public sealed record Network
+{
+    public const string FormatName = "study-network";
+    public const int CurrentVersion = 1;
+
+    public string Format { get; init; } = FormatName;
+    public int Version { get; init; } = CurrentVersion;
+    public string Name { get; init; } = "";
+    public double BaseMva { get; init; } = 100;
+    public double FrequencyHz { get; init; } = 50;
+
+    public IReadOnlyList<Bus> Buses { get; init; } = [];
+    public IReadOnlyList<Supply> Supplies { get; init; } = [];
+    public IReadOnlyList<Generator> Generators { get; init; } = [];
+    public IReadOnlyList<Load> Loads { get; init; } = [];
+    public IReadOnlyList<Shunt> Shunts { get; init; } = [];
+    public IReadOnlyList<Line> Lines { get; init; } = [];
+    public IReadOnlyList<Transformer> Transformers { get; init; } = [];
+    public IReadOnlyList<ThreeWindingTransformer> ThreeWindingTransformers { get; init; } = [];
+    public IReadOnlyList<Breaker> Breakers { get; init; } = [];
+    public IReadOnlyList<Scenario> Scenarios { get; init; } = [];
+
+    /// <summary>For imported cases: the solution printed with the case.</summary>
+    public PublishedSolution? PublishedSolution { get; init; }
+
+    /// <summary>Where each element came from in its file (not written back); see <see cref="SourceMap"/>.</summary>
+    [System.Text.Json.Serialization.JsonIgnore]
+    public SourceMap Source { get; init; } = SourceMap.Empty;
+
+    /// <summary>True when no bus states its base kV: a per-unit-only case (several archive cases).</summary>
+    public bool IsPerUnitOnly => Buses.Count > 0 && Buses.All(b => b.Kv == 0);
+
+    public Bus? FindBus(string id) => Buses.FirstOrDefault(b => b.Id == id);
+
+    public Scenario? FindScenario(string name) =>
+        Scenarios.FirstOrDefault(s => string.Equals(s.Name, name, StringComparison.OrdinalIgnoreCase));
+}
