@@ -47,6 +47,10 @@ public sealed record PuBranch
     public string? Winding { get; init; }
     /// <summary>Index into <see cref="PerUnitModel.Taps"/> when the branch carries a tap changer.</summary>
     public int? Tap { get; init; }
+    /// <summary>Zero-sequence series impedance; null when the data gives none (lines without r0/x0).</summary>
+    public Complex? Z0 { get; init; }
+    /// <summary>Zero-sequence total charging susceptance; null when not given.</summary>
+    public double? B0 { get; init; }
 }
 
 /// <summary>A source: supply point or generator, with its load-flow role.</summary>
@@ -63,6 +67,10 @@ public sealed record PuSource
     /// <summary>Reactive limits in pu; null when not stated (no limit).</summary>
     public double? QMin { get; init; }
     public double? QMax { get; init; }
+    /// <summary>Generators with x''d: subtransient sequence impedances on the system base (null for supplies).</summary>
+    public Complex? Z1 { get; init; }
+    public Complex? Z2 { get; init; }
+    public Complex? Z0 { get; init; }
 }
 
 /// <summary>A load in pu at 1 pu voltage, already scaled by the scenario.</summary>
@@ -106,10 +114,15 @@ public sealed record PuTap
     public int? RegulatedBus { get; init; }
     public double VTarget { get; init; } = 1.0;
     public double BandPu { get; init; }
+    /// <summary>
+    /// True when the tap factor multiplies the From end whatever <see cref="Side"/> says: the windings of
+    /// a three-winding transformer, each a branch from its own terminal to the star.
+    /// </summary>
+    public bool FactorAtFrom { get; init; }
 
     public double TapFactor(int position) => 1.0 + (position - Neutral) * StepPercent / 100.0;
 
-    public double RatioAt(int position) => Side == TapSide.Lv
+    public double RatioAt(int position) => Side == TapSide.Lv && !FactorAtFrom
         ? HvFactor / (LvFactor * TapFactor(position))
         : HvFactor * TapFactor(position) / LvFactor;
 }
