@@ -8,6 +8,7 @@ namespace Study.Core.Io;
     PropertyNamingPolicy = JsonKnownNamingPolicy.CamelCase,
     DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull,
     UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow,
+    RespectRequiredConstructorParameters = true,
     WriteIndented = true,
     IndentSize = 2,
     AllowTrailingCommas = false,

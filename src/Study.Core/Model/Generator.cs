@@ -1,4 +1,7 @@
 // A synchronous generator (or any controllable source) connected to a bus.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>How a generator is controlled in the load flow.</summary>
@@ -19,6 +22,19 @@ public enum GeneratorMode
 /// <summary>A generator: load-flow set points and the sequence reactances fault studies need.</summary>
 public sealed record Generator
 {
+    public Generator() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal Generator(string id, string bus, GeneratorMode mode = GeneratorMode.Pv, double vSet = 1.0, bool inService = true)
+    {
+        Id = id;
+        Bus = bus;
+        Mode = mode;
+        VSet = vSet;
+        InService = inService;
+    }
+
     public required string Id { get; init; }
     public required string Bus { get; init; }
     public GeneratorMode Mode { get; init; } = GeneratorMode.Pv;

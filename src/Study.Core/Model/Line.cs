@@ -1,4 +1,7 @@
 // An overhead line or cable between two buses, as a pi section.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>
@@ -6,6 +9,18 @@ namespace Study.Core.Model;
 /// </summary>
 public sealed record Line
 {
+    public Line() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal Line(string id, string from, string to, bool inService = true)
+    {
+        Id = id;
+        From = from;
+        To = to;
+        InService = inService;
+    }
+
     public required string Id { get; init; }
     public required string From { get; init; }
     public required string To { get; init; }

@@ -1,4 +1,7 @@
 // The whole network as the engineer entered it: engineering units, immutable.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>
@@ -7,6 +10,46 @@ namespace Study.Core.Model;
 /// </summary>
 public sealed record Network
 {
+    public Network() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal Network(
+        string format = FormatName,
+        int version = CurrentVersion,
+        string name = "",
+        double baseMva = 100,
+        double frequencyHz = 50,
+        IReadOnlyList<Bus>? buses = null,
+        IReadOnlyList<Supply>? supplies = null,
+        IReadOnlyList<Generator>? generators = null,
+        IReadOnlyList<Load>? loads = null,
+        IReadOnlyList<Shunt>? shunts = null,
+        IReadOnlyList<Line>? lines = null,
+        IReadOnlyList<Transformer>? transformers = null,
+        IReadOnlyList<ThreeWindingTransformer>? threeWindingTransformers = null,
+        IReadOnlyList<Breaker>? breakers = null,
+        IReadOnlyList<Scenario>? scenarios = null,
+        PublishedSolution? publishedSolution = null)
+    {
+        Format = format;
+        Version = version;
+        Name = name;
+        BaseMva = baseMva;
+        FrequencyHz = frequencyHz;
+        Buses = buses ?? [];
+        Supplies = supplies ?? [];
+        Generators = generators ?? [];
+        Loads = loads ?? [];
+        Shunts = shunts ?? [];
+        Lines = lines ?? [];
+        Transformers = transformers ?? [];
+        ThreeWindingTransformers = threeWindingTransformers ?? [];
+        Breakers = breakers ?? [];
+        Scenarios = scenarios ?? [];
+        PublishedSolution = publishedSolution;
+    }
+
     public const string FormatName = "study-network";
     public const int CurrentVersion = 1;
 
@@ -31,10 +74,11 @@ public sealed record Network
     public PublishedSolution? PublishedSolution { get; init; }
 
     /// <summary>Where each element came from in its file (not written back); see <see cref="SourceMap"/>.</summary>
-    [System.Text.Json.Serialization.JsonIgnore]
+    [JsonIgnore]
     public SourceMap Source { get; init; } = SourceMap.Empty;
 
     /// <summary>True when no bus states its base kV: a per-unit-only case (several archive cases).</summary>
+    [JsonIgnore]
     public bool IsPerUnitOnly => Buses.Count > 0 && Buses.All(b => b.Kv == 0);
 
     public Bus? FindBus(string id) => Buses.FirstOrDefault(b => b.Id == id);

@@ -1,4 +1,7 @@
 // Tap changer of a transformer: which winding it is on, its range, and optional on-load regulation.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>Winding that carries the taps.</summary>
@@ -16,6 +19,17 @@ public enum TapSide
 /// <summary>On-load regulation: hold the voltage of a (local or remote) bus inside a dead band around VTarget.</summary>
 public sealed record TapRegulation
 {
+    public TapRegulation() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal TapRegulation(string bus, double vTarget = 1.0, double bandPu = 0.015)
+    {
+        Bus = bus;
+        VTarget = vTarget;
+        BandPu = bandPu;
+    }
+
     public required string Bus { get; init; }
     public double VTarget { get; init; } = 1.0;
 

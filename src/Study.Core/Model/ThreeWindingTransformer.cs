@@ -1,9 +1,26 @@
 // A three-winding transformer, modelled through its star equivalent.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>A three-winding transformer with pairwise short-circuit impedances on ZBaseMva.</summary>
 public sealed record ThreeWindingTransformer
 {
+    public ThreeWindingTransformer() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal ThreeWindingTransformer(string id, string hv, string mv, string lv, double xr = 30, bool inService = true)
+    {
+        Id = id;
+        Hv = hv;
+        Mv = mv;
+        Lv = lv;
+        Xr = xr;
+        InService = inService;
+    }
+
     public required string Id { get; init; }
     public required string Hv { get; init; }
     public required string Mv { get; init; }

@@ -1,4 +1,7 @@
 // A two-winding transformer bank, from nameplate data or (for imported cases) system per-unit values.
+using System.Diagnostics.CodeAnalysis;
+using System.Text.Json.Serialization;
+
 namespace Study.Core.Model;
 
 /// <summary>
@@ -7,6 +10,19 @@ namespace Study.Core.Model;
 /// </summary>
 public sealed record Transformer
 {
+    public Transformer() { }
+
+    /// <summary>Used when reading a file: absent keys take the defaults stated here.</summary>
+    [JsonConstructor, SetsRequiredMembers]
+    internal Transformer(string id, string hv, string lv, int units = 1, bool inService = true)
+    {
+        Id = id;
+        Hv = hv;
+        Lv = lv;
+        Units = units;
+        InService = inService;
+    }
+
     public required string Id { get; init; }
     public required string Hv { get; init; }
     public required string Lv { get; init; }
