@@ -4,8 +4,10 @@ namespace Study.Core.Io;
 /// <summary>Writes a file so that a crash mid-write leaves the old file intact.</summary>
 public static class AtomicFile
 {
-    /// <summary>Hook for tests: runs after the temporary file is written, before the rename.</summary>
-    internal static Action<string>? BeforeRename { get; set; }
+    [ThreadStatic] private static Action<string>? beforeRename;
+
+    /// <summary>Hook for tests (this thread only): runs after the temporary file is written, before the rename.</summary>
+    internal static Action<string>? BeforeRename { get => beforeRename; set => beforeRename = value; }
 
     public static void WriteAllText(string path, string text)
     {

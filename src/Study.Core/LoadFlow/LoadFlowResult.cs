@@ -27,6 +27,8 @@ public sealed record BusResult
     public ViolationKind Violation { get; init; }
     public double VMin { get; init; }
     public double VMax { get; init; }
+    /// <summary>False for a bus in an island with no slack source (after an outage, say).</summary>
+    public bool Energised { get; init; } = true;
 }
 
 /// <summary>Flows at both ends of one branch (a three-winding transformer gives one row per winding).</summary>
@@ -62,6 +64,7 @@ public sealed record TapResult
     public bool Regulating { get; init; }
     /// <summary>"min" or "max" when the tap wants to move further but cannot; null otherwise.</summary>
     public string? AtLimit { get; init; }
+    public string? RegulatedBus { get; init; }
 }
 
 /// <summary>System totals.</summary>
@@ -75,6 +78,8 @@ public sealed record LoadFlowTotals
     public double LossMvar { get; init; }
     /// <summary>Reactive power of shunts (capacitive positive), Mvar.</summary>
     public double ShuntMvar { get; init; }
+    /// <summary>Active power absorbed by shunts, MW.</summary>
+    public double ShuntMw { get; init; }
 }
 
 /// <summary>A limit broken in the solved state.</summary>
@@ -108,4 +113,9 @@ public sealed record LoadFlowResult
     public LoadFlowTotals Totals { get; init; } = new();
     public IReadOnlyList<Violation> Violations { get; init; } = [];
     public IReadOnlyList<IterationRecord> Log { get; init; } = [];
+    /// <summary>Voltage-controlling buses held at a reactive limit, as "bus:max" or "bus:min".</summary>
+    public IReadOnlyList<string> BusesAtReactiveLimit { get; init; } = [];
+
+    /// <summary>The Jacobian at the final state, when asked for (rows/columns: ΔP then ΔQ of the unknown buses).</summary>
+    public Numerics.CscMatrix<double>? Jacobian { get; init; }
 }
