@@ -1,0 +1,34 @@
+// Which keys of one impedance form an element gives, for "exactly one form" rules.
+namespace Study.Core.Model.Validation;
+
+/// <summary>One way of stating an impedance (per km, ohm totals, per unit, nameplate) and the keys given in it.</summary>
+internal sealed record ImpedanceForm(string Name, IReadOnlyList<string> GivenKeys)
+{
+    public bool IsGiven => GivenKeys.Count > 0;
+
+    public static ImpedanceForm Of(string name, params ReadOnlySpan<(string Key, double? Value)> keys)
+    {
+        var given = new List<string>();
+        foreach ((string key, double? value) in keys)
+        {
+            if (value.HasValue) given.Add(key);
+        }
+        return new ImpedanceForm(name, given);
+    }
+
+    /// <summary>"ohm totals (rOhm, xOhm)".</summary>
+    public string Describe() => $"{Name} ({string.Join(", ", GivenKeys)})";
+
+    /// <summary>Reports a mix of forms; returns the one form given, or null when none or several are.</summary>
+    public static ImpedanceForm? Single(ElementScope at, string noneMessage, params ImpedanceForm[] forms)
+    {
+        ImpedanceForm[] given = forms.Where(f => f.IsGiven).ToArray();
+        if (given.Length == 1) return given[0];
+        if (given.Length == 0)
+            at.Error(null, noneMessage);
+        else
+            at.Error(given[1].GivenKeys[0],
+                $"mixes impedance forms: {string.Join(" and ", given.Select(f => f.Describe()))}; keep exactly one form");
+        return null;
+    }
+}

@@ -1,0 +1,95 @@
+// Two-winding transformer checks: ends, exactly one data form (nameplate or per unit), kV against buses, tap.
+namespace Study.Core.Model.Validation;
+
+internal static class TransformerRules
+{
+    public static void Check(ValidationContext context, Transformer t)
+    {
+        ElementScope at = context.At(ElementKind.Transformer, t.Id);
+        Bus? hv = at.BusRef("hv", t.Hv);
+        Bus? lv = at.BusRef("lv", t.Lv);
+        at.DistinctEnds("hv", t.Hv, "lv", t.Lv);
+        at.AllFinite(("mva", t.Mva), ("hvKv", t.HvKv), ("lvKv", t.LvKv), ("zPercent", t.ZPercent), ("xr", t.Xr),
+            ("z0Percent", t.Z0Percent), ("phaseShiftDeg", t.PhaseShiftDeg), ("ratingMva", t.RatingMva),
+            ("rPu", t.RPu), ("xPu", t.XPu), ("bPu", t.BPu), ("ratio", t.Ratio));
+
+        // Rated kV do not decide the form: an imported per-unit branch may state them for information.
+        var nameplate = ImpedanceForm.Of("nameplate", ("mva", t.Mva), ("zPercent", t.ZPercent), ("xr", t.Xr), ("z0Percent", t.Z0Percent));
+        var perUnit = ImpedanceForm.Of("per unit", ("rPu", t.RPu), ("xPu", t.XPu), ("bPu", t.BPu), ("ratio", t.Ratio));
+        ImpedanceForm? form = ImpedanceForm.Single(at,
+            "gives neither nameplate data (mva, hvKv, lvKv, zPercent, xr) nor per-unit data (xPu, with rPu and ratio)",
+            nameplate, perUnit);
+        if (form == nameplate) CheckNameplate(at, t, hv, lv);
+        else if (form == perUnit) CheckPerUnit(at, t);
+
+        if (t.Units < 1)
+            at.Error("units", $"units is {Numbers.Show(t.Units)}: give the number of identical units in the bank, 1 or more");
+        at.NotNegative("ratingMva", t.RatingMva, "a thermal rating (MVA)");
+        at.Positive("xr", t.Xr, "the X/R ratio");
+        at.Positive("z0Percent", t.Z0Percent, "the zero-sequence impedance (percent)");
+        EarthingRules.Check(at, "hvNeutral", t.HvNeutral);
+        EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
+        if (form == nameplate) CheckNoLoad(at, t.NoLoad, t.Mva);
+        TapRules.Check(at, t.Tap, hasMvWinding: false);
+    }
+
+    /// <summary>
+    /// No-load current and iron loss, shared with three-winding transformers. The loss is the
+    /// in-phase part of the no-load current, so p0Kw cannot exceed i0Percent/100 · mva · 1000.
+    /// </summary>
+    public static void CheckNoLoad(ElementScope at, NoLoadLoss? noLoad, double? mva)
+    {
+        if (noLoad is null) return;
+        if (!at.AllFinite(("noLoad.i0Percent", noLoad.I0Percent), ("noLoad.p0Kw", noLoad.P0Kw))) return;
+        at.NotNegative("noLoad.i0Percent", noLoad.I0Percent, "the no-load current");
+        at.NotNegative("noLoad.p0Kw", noLoad.P0Kw, "the no-load loss");
+        if (mva is double s && double.IsFinite(s) && s > 0 && noLoad.I0Percent >= 0)
+        {
+            double mostKw = noLoad.I0Percent / 100 * s * 1000;
+            if (noLoad.P0Kw > mostKw * (1 + 1e-12))
+                at.Error("noLoad.p0Kw", $"noLoad.p0Kw {Numbers.Show(noLoad.P0Kw)} kW is more than i0Percent " +
+                    $"{Numbers.Show(noLoad.I0Percent)} % of {Numbers.Show(s)} MVA allows ({Numbers.Show(mostKw)} kW): check both values");
+        }
+    }
+
+    private static void CheckNameplate(ElementScope at, Transformer t, Bus? hv, Bus? lv)
+    {
+        Require(at, "mva", t.Mva, "the rated power of one unit in MVA");
+        Require(at, "hvKv", t.HvKv, "the hv rated voltage in kV");
+        Require(at, "lvKv", t.LvKv, "the lv rated voltage in kV");
+        Require(at, "zPercent", t.ZPercent, "the short-circuit impedance in percent on the unit rating");
+        Require(at, "xr", t.Xr, "the X/R ratio of the short-circuit impedance");
+        at.Positive("mva", t.Mva, "the rated power (MVA)");
+        at.Kv("hvKv", t.HvKv, zeroAllowed: false);
+        at.Kv("lvKv", t.LvKv, zeroAllowed: false);
+        if (t.ZPercent == 0)
+            at.Error("zPercent", "zPercent is 0: a zero-impedance connection belongs in a bus merge, not a branch");
+        else if (t.ZPercent < 0)
+            at.Error("zPercent", $"zPercent is {Numbers.Show(t.ZPercent.Value)}: the nameplate impedance is a magnitude, " +
+                "above 0 (give a negative reactance in per-unit form, xPu)");
+        bool swapped = WindingKvRules.Check(at, ", or give the transformer as rPu, xPu and ratio",
+            new Winding("hv", "hvKv", t.HvKv, hv), new Winding("lv", "lvKv", t.LvKv, lv));
+        if (!swapped) WindingKvRules.CheckOrder(at, "hvKv", t.HvKv, "lvKv", t.LvKv);
+    }
+
+    private static void CheckPerUnit(ElementScope at, Transformer t)
+    {
+        Require(at, "xPu", t.XPu, "the series reactance in per unit on the system base");
+        Require(at, "rPu", t.RPu, "the series resistance in per unit on the system base (0 where nil)");
+        SeriesImpedance.Check(at, "rPu", t.RPu, "xPu", t.XPu);
+        // Ratio 0 means nominal, as in the Common Format.
+        at.NotNegative("ratio", t.Ratio, "the off-nominal turns ratio (1 or 0 = nominal)");
+        foreach ((string key, double? kv) in new[] { ("hvKv", t.HvKv), ("lvKv", t.LvKv) })
+        {
+            if (kv is double v)
+                at.Warning(key, $"{key} {Numbers.Show(v)} is not used: the per-unit form takes xPu and ratio as they stand");
+        }
+        if (t.NoLoad is not null)
+            at.Error("noLoad", "noLoad needs the nameplate form (mva, hvKv, lvKv, zPercent, xr): give the magnetising branch as bPu instead");
+    }
+
+    private static void Require(ElementScope at, string field, double? value, string what)
+    {
+        if (value is null) at.Error(field, $"{field} is missing: give {what}");
+    }
+}
