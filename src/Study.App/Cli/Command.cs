@@ -1,0 +1,23 @@
+// What every subcommand of `study` provides: its name, usage text, the options it knows, and Run.
+namespace Study.App.Cli;
+
+/// <summary>Where a command writes: standard output for results, standard error for messages.</summary>
+public sealed record CommandContext(TextWriter Out, TextWriter Err);
+
+/// <summary>A subcommand. The CLI layer only parses, calls the engine and renders the result record.</summary>
+public abstract class Command
+{
+    public abstract string Name { get; }
+    public abstract string Summary { get; }
+    /// <summary>One usage line, e.g. "study check FILE [--json]".</summary>
+    public abstract string Usage { get; }
+    /// <summary>Lines describing each option, shown by `study help NAME`.</summary>
+    public virtual IReadOnlyList<string> OptionHelp => [];
+    protected virtual IEnumerable<string> ValueOptions => [];
+    protected virtual IEnumerable<string> Flags => ["json"];
+
+    public int Run(IReadOnlyList<string> args, CommandContext context) =>
+        Execute(new Arguments(args, ValueOptions, Flags), context);
+
+    protected abstract int Execute(Arguments args, CommandContext context);
+}

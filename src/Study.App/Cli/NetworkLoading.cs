@@ -1,0 +1,35 @@
+// Shared steps of the study commands: read a network, refuse it when validation finds errors, pick a scenario.
+using Study.Core.Io;
+using Study.Core.Model;
+using Study.Core.Model.Validation;
+
+namespace Study.App.Cli;
+
+public static class NetworkLoading
+{
+    /// <summary>Reads and validates; errors become one InputException listing every problem.</summary>
+    public static Network ReadValid(string path, TextWriter err)
+    {
+        Network network = NetworkFile.Read(path);
+        ValidationReport report = NetworkValidator.Validate(network);
+        if (report.HasErrors)
+        {
+            var errors = report.Problems.Where(p => p.Severity == Severity.Error).ToList();
+            throw new InputException(
+                $"{errors.Count} error(s) in the network; run 'study check {path}' for the full report:\n  "
+                + string.Join("\n  ", errors.Take(10).Select(p => p.Describe()))
+                + (errors.Count > 10 ? $"\n  ... and {errors.Count - 10} more" : ""));
+        }
+        return network;
+    }
+
+    /// <summary>The named scenario, or null (loads as entered) when none is asked for.</summary>
+    public static Scenario? PickScenario(Network network, string? name)
+    {
+        if (name is null) return null;
+        return network.FindScenario(name) ?? throw new UsageException(
+            network.Scenarios.Count == 0
+                ? $"scenario '{name}' not found: the network defines no scenarios"
+                : $"scenario '{name}' not found; the network has: {string.Join(", ", network.Scenarios.Select(s => s.Name))}");
+    }
+}

@@ -1,0 +1,67 @@
+// `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape of DESIGN.md.
+using Study.Core.Io;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+using Study.Core.Units;
+
+namespace Study.App.Cli;
+
+public sealed class SolveCommand : Command
+{
+    public override string Name => "solve";
+    public override string Summary => "solve the load flow (Newton-Raphson) and report voltages, flows, losses and violations";
+    public override string Usage =>
+        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE]";
+    public override IReadOnlyList<string> OptionHelp =>
+    [
+        "--scenario NAME         scale loads as the named scenario does (default: loads as entered)",
+        "--json                  machine-readable result",
+        "--csv DIR               write buses.csv, branches.csv, taps.csv, violations.csv into DIR",
+        "--tolerance X           largest P/Q mismatch accepted, pu (default 1e-8)",
+        "--max-iterations N      Newton-Raphson iterations per solve (default 30)",
+        "--no-q-limits           do not switch PV buses to PQ at their reactive limits",
+        "--fixed-taps            hold on-load tap changers at the positions in the file",
+        "--export-jacobian FILE  write the Jacobian of the last iteration (Matrix Market)",
+    ];
+    protected override IEnumerable<string> ValueOptions => ["scenario", "csv", "tolerance", "max-iterations", "export-jacobian"];
+    protected override IEnumerable<string> Flags => ["json", "no-q-limits", "fixed-taps"];
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
+        args.ExpectPositionals(1);
+        var options = new LoadFlowOptions
+        {
+            TolerancePu = args.Number("tolerance") ?? LoadFlowOptions.Default.TolerancePu,
+            MaxIterations = args.Integer("max-iterations") ?? LoadFlowOptions.Default.MaxIterations,
+            EnforceQLimits = !args.Has("no-q-limits"),
+            RegulateTaps = !args.Has("fixed-taps"),
+            CaptureJacobian = args.Value("export-jacobian") is not null,
+        };
+        if (!(options.TolerancePu > 0)) throw new UsageException("--tolerance must be positive");
+        if (options.MaxIterations < 1) throw new UsageException("--max-iterations must be at least 1");
+
+        Network network = NetworkLoading.ReadValid(path, context.Err);
+        Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
+        PerUnitModel model = PerUnitModel.Build(network, scenario);
+        LoadFlowResult result = LoadFlowSolver.Solve(model, options);
+        var comparison = PublishedComparison.Compare(network, result);
+
+        if (args.Value("export-jacobian") is string jacobianPath && result.Jacobian is not null)
+            MatrixMarket.Write(result.Jacobian, jacobianPath,
+                $"load-flow Jacobian at the {(result.Converged ? "converged" : "last")} state of {network.Name}\n"
+                + "rows: dP then dQ (dV for PV buses) of the unknown buses; columns: angle then |V|");
+        if (args.Value("csv") is string dir)
+            LoadFlowCsv.Write(result, dir);
+        if (args.Has("json"))
+            context.Out.Write(CliJson.Serialize(SolveJson.From(result, comparison)));
+        else
+            context.Out.Write(LoadFlowReport.Render(path, network, result, comparison));
+        if (!result.Converged)
+        {
+            context.Err.WriteLine($"error: {path}: the load flow did not converge: {result.Message}");
+            return ExitCode.NoConvergence;
+        }
+        return ExitCode.Done;
+    }
+}
