@@ -1,0 +1,211 @@
+// Left-looking LU with threshold partial pivoting (Gilbert and Peierls 1988; Davis 2006, §6.3,
+// cs_lu): column k of L and U comes from one sparse triangular solve x = L \ A(:,q[k]) whose
+// nonzero pattern is found first by depth-first search (Davis 2006, §3.2, cs_reach, cs_dfs).
+// The search runs on a symmetrically pruned graph of L (Eisenstat and Liu, SIAM J. Matrix Anal.
+// Appl. 13(1), 1992), which finds the same reach while skipping edges another path already covers.
+using System.Runtime.CompilerServices;
+
+namespace Study.Core.Numerics;
+
+public sealed partial class SparseLu<T>
+{
+    // Factorises a from scratch in the symbolic column order, choosing pivots. During the loop L's
+    // row indices are rows of A; they are renumbered to pivot order at the end.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private bool FactorWithPivoting(CscMatrix<T> a, out int singularColumn)
+    {
+        int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder;
+        T[] ax = a.Values;
+        int[] lpl = lp, upl = up, pinvl = pinv, xil = xi;
+        int[] lil = li, uil = ui;
+        T[] lxl = lx, uxl = ux, xl = x;
+        double tol = Options.PivotTolerance, singularTol = Options.SingularPivotTolerance;
+        Array.Fill(pinvl, -1);
+        Array.Fill(lpend, -1);
+        Array.Clear(mark);
+        int lnz = 0, unz = 0;
+        for (int k = 0; k < n; k++)
+        {
+            lpl[k] = lnz;
+            upl[k] = unz;
+            int col = q[k];
+            int top = Reach(col, ap, ai, lil, k + 1);
+
+            // At most n - top entries go to L and U; grow (only here, never in Refactor) if needed.
+            int count = n - top;
+            if (lnz + count > lil.Length)
+            {
+                Grow(ref li, ref lx, lnz + count);
+                lil = li;
+                lxl = lx;
+            }
+            if (unz + count > uil.Length)
+            {
+                Grow(ref ui, ref ux, unz + count);
+                uil = ui;
+                uxl = ux;
+            }
+
+            // x = L \ A(:,col) over the reach, in topological order (Davis 2006, §3.2, cs_spsolve).
+            double columnMax = 0;
+            for (int p = ap[col]; p < ap[col + 1]; p++)
+            {
+                xl[ai[p]] += ax[p];
+                double m = Scalar.Magnitude(ax[p]);
+                if (m > columnMax) columnMax = m;
+            }
+            for (int px = top; px < n; px++)
+            {
+                int j = xil[px];
+                int jnew = pinvl[j];
+                if (jnew < 0) continue;
+                T xj = xl[j];
+                if (T.IsZero(xj)) continue;
+                for (int p = lpl[jnew]; p < lpl[jnew + 1]; p++) xl[lil[p]] -= lxl[p] * xj;
+            }
+
+            // Pivot: the largest candidate, unless the diagonal is within tol of it (cs_lu).
+            int ipiv = -1;
+            double amax = -1;
+            for (int px = top; px < n; px++)
+            {
+                int i = xil[px];
+                if (pinvl[i] < 0)
+                {
+                    double t = Scalar.Magnitude(xl[i]);
+                    if (t > amax)
+                    {
+                        amax = t;
+                        ipiv = i;
+                    }
+                }
+                else
+                {
+                    uil[unz] = pinvl[i];
+                    uxl[unz++] = xl[i];
+                }
+            }
+            if (ipiv == -1 || amax <= 0 || amax <= singularTol * columnMax)
+            {
+                for (int px = top; px < n; px++) xl[xil[px]] = T.Zero;
+                singularColumn = col;
+                return false;
+            }
+            if (pinvl[col] < 0 && Scalar.Magnitude(xl[col]) >= amax * tol) ipiv = col;
+
+            T pivot = xl[ipiv];
+            uil[unz] = k;
+            uxl[unz++] = pivot;
+            pinvl[ipiv] = k;
+            T inverse = T.One / pivot;
+            for (int px = top; px < n; px++)
+            {
+                int i = xil[px];
+                if (pinvl[i] < 0)
+                {
+                    lil[lnz] = i;
+                    lxl[lnz++] = xl[i] * inverse;
+                }
+                xl[i] = T.Zero;
+            }
+            Prune(ipiv, upl[k], unz - 1, lil, lxl);
+        }
+        lpl[n] = lnz;
+        upl[n] = unz;
+        for (int p = 0; p < lnz; p++) lil[p] = pinvl[lil[p]];
+        singularColumn = -1;
+        return true;
+    }
+
+    // xi[top..n-1] = nodes reachable from the pattern of A(:,col) in the graph of L, in topological
+    // order (Davis 2006, §3.2, cs_reach). Nodes are rows of A; a row not yet pivotal has no edges.
+    private int Reach(int col, int[] ap, int[] ai, int[] lil, int stamp)
+    {
+        int[] markl = mark;
+        int top = n;
+        for (int p = ap[col]; p < ap[col + 1]; p++)
+        {
+            int i = ai[p];
+            if (markl[i] != stamp) top = DepthFirst(i, top, lil, stamp);
+        }
+        return top;
+    }
+
+    // Non-recursive DFS from node j (Davis 2006, §3.2, cs_dfs): the recursion stack grows from the
+    // front of xi while finished nodes are pushed onto its back, which never overlap.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private int DepthFirst(int j, int top, int[] lil, int stamp)
+    {
+        int[] lpl = lp, lpendl = lpend, pinvl = pinv, xil = xi, stack = pstack, markl = mark;
+        int head = 0;
+        xil[0] = j;
+        while (head >= 0)
+        {
+            j = xil[head];
+            int jnew = pinvl[j];
+            if (markl[j] != stamp)
+            {
+                markl[j] = stamp;
+                stack[head] = jnew < 0 ? 0 : lpl[jnew];
+            }
+            bool done = true;
+            int p2 = jnew < 0 ? 0 : lpendl[jnew] >= 0 ? lpendl[jnew] : lpl[jnew + 1];
+            for (int p = stack[head]; p < p2; p++)
+            {
+                int i = lil[p];
+                if (markl[i] == stamp) continue;
+                stack[head] = p;
+                xil[++head] = i;
+                done = false;
+                break;
+            }
+            if (done)
+            {
+                head--;
+                xil[--top] = j;
+            }
+        }
+        return top;
+    }
+
+    // Symmetric pruning after step k: for each column j of L with U(j,k) != 0 that holds the new
+    // pivot row, rows of L(:,j) not yet pivotal are reachable through that pivot row, so the DFS
+    // may stop at the pivotal ones. They are moved to the front and lpend[j] marks where they end.
+    private void Prune(int pivotRow, int uStart, int uEnd, int[] lil, T[] lxl)
+    {
+        int[] lpl = lp, lpendl = lpend, pinvl = pinv, uil = ui;
+        for (int pu = uStart; pu < uEnd; pu++)
+        {
+            int j = uil[pu];
+            if (lpendl[j] >= 0) continue;
+            int start = lpl[j], end = lpl[j + 1];
+            if (Array.IndexOf(lil, pivotRow, start, end - start) < 0) continue;
+            int head = start, tail = end;
+            while (head < tail)
+            {
+                int i = lil[head];
+                if (pinvl[i] >= 0)
+                {
+                    head++;
+                }
+                else
+                {
+                    tail--;
+                    lil[head] = lil[tail];
+                    lil[tail] = i;
+                    (lxl[head], lxl[tail]) = (lxl[tail], lxl[head]);
+                }
+            }
+            lpendl[j] = tail;
+        }
+    }
+
+    private static void Grow(ref int[] index, ref T[] values, int needed)
+    {
+        long grown = Math.Max(needed, (long)index.Length + index.Length / 2 + 1024);
+        int size = (int)Math.Min(grown, Array.MaxLength);
+        if (size < needed) throw new OutOfMemoryException("the LU factors exceed the largest array .NET allows.");
+        Array.Resize(ref index, size);
+        Array.Resize(ref values, size);
+    }
+}
