@@ -15,6 +15,7 @@ public static class StudyCommand
         new CheckCommand(),
         new ConvertCommand(),
         new SolveCommand(),
+        new TapsCommand(),
         new ExplainCommand(),
     ];
 

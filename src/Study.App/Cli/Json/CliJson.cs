@@ -12,6 +12,7 @@ namespace Study.App.Cli;
     NumberHandling = JsonNumberHandling.Strict)]
 [JsonSerializable(typeof(CheckJson))]
 [JsonSerializable(typeof(SolveJson))]
+[JsonSerializable(typeof(TapsJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson
