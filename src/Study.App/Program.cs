@@ -1,5 +1,9 @@
-// The `study` executable: subcommands go to the command line, anything else opens the terminal UI.
+// The `study` executable: subcommands go to the command line; no argument or a file opens the terminal UI.
 using Study.App.Cli;
+using Study.App.Tui;
+
+if (args.Length == 0 || (args.Length == 1 && !StudyCommand.IsCommand(args[0]) && !args[0].StartsWith('-')))
+    return StudyTui.Run(args.Length == 0 ? null : args[0]);
 
 var context = new CommandContext(Console.Out, Console.Error);
 return StudyCommand.Run(args, context);

@@ -1,0 +1,84 @@
+// Edit forms and result formatting, without a screen: what the form accepts and what the tables say.
+using Study.App.Tui;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+
+namespace Study.App.Tests.Tui;
+
+public sealed class FormAndResultTests
+{
+    [Fact]
+    public void A_form_builds_the_edited_element_and_previews_its_per_unit_values()
+    {
+        var form = new ElementForm(SampleNetwork.Build(), ElementKind.Line, "F1");
+        int length = form.Fields.ToList().FindIndex(f => f.Header == "Length km");
+        form.Texts[length] = "3.5";
+        FormState state = form.Evaluate();
+        Assert.True(state.CanAccept);
+        Assert.Equal(3.5, ((Line)state.Element!).LengthKm);
+        Assert.NotEmpty(state.Preview);
+    }
+
+    [Fact]
+    public void A_form_with_text_in_a_number_field_cannot_be_accepted_and_says_why()
+    {
+        var form = new ElementForm(SampleNetwork.Build(), ElementKind.Bus, "B11");
+        form.Texts[1] = "eleven";
+        FormState state = form.Evaluate();
+        Assert.False(state.CanAccept);
+        Assert.Contains(state.Problems, p => p.Contains("not a number", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_form_shows_the_validator_findings_for_the_element()
+    {
+        var form = new ElementForm(SampleNetwork.Build(), ElementKind.Load, "L1");
+        form.Texts[1] = "NOWHERE";
+        FormState state = form.Evaluate();
+        Assert.Contains(state.Problems, p => p.StartsWith("error", StringComparison.Ordinal) && p.Contains("NOWHERE", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_new_element_gets_a_free_id_and_blank_optional_fields_mean_not_given()
+    {
+        var form = new ElementForm(SampleNetwork.Build(), ElementKind.Load, null);
+        Assert.Equal("L2", form.Texts[0]);
+        FormState state = form.Evaluate();
+        Assert.True(state.CanAccept);
+    }
+
+    [Fact]
+    public void Bus_results_mark_low_and_high_voltages_with_triangles()
+    {
+        var result = new LoadFlowResult
+        {
+            Buses =
+            [
+                new BusResult { Id = "A", VPu = 0.93, Violation = ViolationKind.Low, VMin = 0.95, VMax = 1.05 },
+                new BusResult { Id = "B", VPu = 1.07, Violation = ViolationKind.High, VMin = 0.95, VMax = 1.05 },
+            ],
+        };
+        TextTable table = ResultTables.Buses(result);
+        Assert.Equal("0.9300▼", table.RowCells[0][2]);
+        Assert.Equal("1.0700▲", table.RowCells[1][2]);
+        IReadOnlyList<VoltageBarLine> bars = VoltageBars.Layout(result, 60);
+        Assert.Contains("▼", bars[0].Text);
+        Assert.Equal(ViolationKind.High, bars[1].Violation);
+    }
+
+    [Fact]
+    public void The_status_line_keeps_the_summary_and_cuts_hints_to_fit()
+    {
+        string line = StatusLine.Compose("solved 3 it │ loss 0.721 MW │ 0 viol. │ scenario base", 80);
+        Assert.Equal(80, line.Length);
+        Assert.StartsWith("solved 3 it", line);
+        Assert.Contains("F1 Keys", line);
+    }
+
+    [Fact]
+    public void Help_lists_every_command_key()
+    {
+        string help = HelpDialog.Text();
+        foreach (TuiCommand c in TuiCommands.All) Assert.Contains(c.KeyText, help);
+    }
+}
