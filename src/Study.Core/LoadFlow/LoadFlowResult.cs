@@ -118,4 +118,7 @@ public sealed record LoadFlowResult
 
     /// <summary>The Jacobian at the final state, when asked for (rows/columns: ΔP then ΔQ of the unknown buses).</summary>
     public Numerics.CscMatrix<double>? Jacobian { get; init; }
+
+    /// <summary>Stage times of this solve.</summary>
+    public LoadFlowTimings? Timings { get; init; }
 }

@@ -1,5 +1,5 @@
 // The load flow: Newton-Raphson inside outer control loops for reactive limits and on-load taps.
-using System.Numerics;
+using System.Diagnostics;
 using Study.Core.Units;
 
 namespace Study.Core.LoadFlow;
@@ -15,11 +15,21 @@ public static class LoadFlowSolver
     public static LoadFlowResult Solve(PerUnitModel model, LoadFlowOptions? options = null, CancellationToken cancel = default)
     {
         options ??= LoadFlowOptions.Default;
+        long start = Stopwatch.GetTimestamp();
         var schedule = new BusSchedule(model);
         int[] island = Islands.Label(model);
         Islands.MarkDead(schedule.Type, island);
         var y = new AdmittanceMatrix(model);
+        long admittance = Stopwatch.GetTimestamp();
         var nr = new NewtonRaphson(y, schedule);
+        long analysed = Stopwatch.GetTimestamp();
+        LoadFlowTimings Timings() => new()
+        {
+            AdmittanceMs = Ms(admittance - start), AnalyseMs = Ms(analysed - admittance),
+            JacobianMs = Ms(nr.JacobianTicks), FactorMs = Ms(nr.FactorTicks), SolveMs = Ms(nr.SolveTicks),
+            TotalMs = Ms(Stopwatch.GetTimestamp() - start),
+            JacobianSize = nr.JacobianSize, JacobianNonZeros = nr.JacobianNonZeros, FactorNonZeros = nr.FactorNonZeros,
+        };
         InitialState(model, schedule, island, nr, options.WarmStart);
 
         var log = new List<IterationRecord>();
@@ -32,15 +42,18 @@ public static class LoadFlowSolver
                 cancel, out int iterations);
             total += iterations;
             if (outcome != InnerOutcome.Converged)
-                return Failed(model, nr, outcome, total, log, controls.Model) with { Jacobian = Capture(nr, options) };
+                return Failed(model, nr, outcome, total, log, controls.Model) with { Jacobian = Capture(nr, options), Timings = Timings() };
             if (round >= options.MaxControlRounds) break;
             bool changed = controls.AdjustReactiveLimits();
             if (!changed) changed = controls.AdjustTaps(y);
             if (!changed) break;
         }
-        return LoadFlowResults.Build(controls.Model, schedule, nr, y, controls, total, log, options)
+        LoadFlowResult result = LoadFlowResults.Build(controls.Model, schedule, nr, y, controls, total, log, options)
             with { Jacobian = Capture(nr, options) };
+        return result with { Timings = Timings() };
     }
+
+    private static double Ms(long ticks) => ticks * 1000.0 / Stopwatch.Frequency;
 
     private static Numerics.CscMatrix<double>? Capture(NewtonRaphson nr, LoadFlowOptions options) =>
         options.CaptureJacobian && nr.JacobianSize > 0 ? nr.JacobianAtState() : null;

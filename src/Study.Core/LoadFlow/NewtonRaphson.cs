@@ -123,6 +123,11 @@ internal sealed class NewtonRaphson
     public int FactorNonZeros => lu.NonZerosLU;
     public int BusOfUnknown(int k) => order[k];
 
+    /// <summary>Accumulated stage times, in Stopwatch ticks.</summary>
+    public long JacobianTicks { get; private set; }
+    public long FactorTicks { get; private set; }
+    public long SolveTicks { get; private set; }
+
     public double MaxMismatch { get; private set; }
     public int WorstBus { get; private set; } = -1;
     public int SingularBus { get; private set; } = -1;
@@ -141,6 +146,7 @@ internal sealed class NewtonRaphson
         while (true)
         {
             cancel.ThrowIfCancellationRequested();
+            long t0 = System.Diagnostics.Stopwatch.GetTimestamp();
             ComputeMismatch();
             onIteration(MaxMismatch, WorstBus);
             if (!double.IsFinite(MaxMismatch) || MaxMismatch > 1e8) return InnerOutcome.Diverged;
@@ -148,8 +154,12 @@ internal sealed class NewtonRaphson
             if (iterations >= maxIterations) return InnerOutcome.IterationLimit;
             iterations++;
             FillJacobian();
+            long t1 = System.Diagnostics.Stopwatch.GetTimestamp();
+            JacobianTicks += t1 - t0;
             int singular;
             bool ok = factorised ? lu.TryRefactor(jacobian, out singular) : lu.TryFactor(jacobian, out singular);
+            long t2 = System.Diagnostics.Stopwatch.GetTimestamp();
+            FactorTicks += t2 - t1;
             if (!ok)
             {
                 SingularBus = order[singular % m];
@@ -158,6 +168,7 @@ internal sealed class NewtonRaphson
             factorised = true;
             for (int r = 0; r < step.Length; r++) step[r] = -Mismatch[r];
             lu.Solve(step);
+            SolveTicks += System.Diagnostics.Stopwatch.GetTimestamp() - t2;
             for (int k = 0; k < m; k++)
             {
                 int i = order[k];
