@@ -1,0 +1,37 @@
+// What a fault study is asked to do: which buses, which fault types, which method and level.
+using System.Numerics;
+using Study.Core.LoadFlow;
+using Study.Core.Units;
+
+namespace Study.Core.Faults;
+
+/// <summary>A fault study request; the defaults give the all-bus IEC 60909 maximum scan for 3ph and slg.</summary>
+public sealed record FaultRequest
+{
+    public static FaultRequest Default { get; } = new();
+
+    /// <summary>Bus ids to fault; null means every bus (internal star points of three-winding banks excepted).</summary>
+    public IReadOnlyList<string>? Buses { get; init; }
+
+    public IReadOnlyList<FaultKind> Kinds { get; init; } = [FaultKind.ThreePhase, FaultKind.LineToEarth];
+
+    /// <summary>Fault impedance Z_f in ohm (R + jX), converted on the faulted bus's base; zero for a bolted fault.</summary>
+    public Complex FaultImpedanceOhm { get; init; }
+
+    public FaultMethod Method { get; init; } = FaultMethod.Iec60909;
+
+    /// <summary>Max: c_max and each supply's scMvaMax; Min: c_min and scMvaMin (IEC 60909-0, from memory).</summary>
+    public FaultLevel Level { get; init; } = FaultLevel.Max;
+
+    /// <summary>For <see cref="FaultMethod.LoadFlow"/>: a converged load flow of the same model; solved here when null.</summary>
+    public LoadFlowResult? PreFault { get; init; }
+
+    /// <summary>Options of the load flow solved here when <see cref="PreFault"/> is null.</summary>
+    public LoadFlowOptions? LoadFlowOptions { get; init; }
+
+    /// <summary>Post-fault phase voltages at the faulted bus and its neighbours.</summary>
+    public bool IncludeVoltages { get; init; } = true;
+
+    /// <summary>Each branch's current into the faulted bus.</summary>
+    public bool IncludeContributions { get; init; } = true;
+}

@@ -1,0 +1,19 @@
+// Everything a fault study produces, read alike by the CLI, the TUI and the tests.
+using Study.Core.Units;
+
+namespace Study.Core.Faults;
+
+public sealed record FaultResult
+{
+    public FaultMethod Method { get; init; }
+    public FaultLevel Level { get; init; }
+    /// <summary>The caution every fault output carries (<see cref="FaultStudy.Caution"/>).</summary>
+    public string Caution { get; init; } = FaultStudy.Caution;
+    /// <summary>Every fault, by bus in network order, then by kind in the order asked.</summary>
+    public IReadOnlyList<ShortCircuitLevel> Faults { get; init; } = [];
+    public IReadOnlyList<BreakerDuty> Breakers { get; init; } = [];
+    /// <summary>Assumptions and defaults the engineer should see (assumed power factors, sources left out, ...).</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+    /// <summary>True when no bus states its kV: results in per unit only.</summary>
+    public bool PerUnitOnly { get; init; }
+}

@@ -1,0 +1,169 @@
+// The branches of each sequence network: corrected impedances, rated ratios, zero-sequence paths by vector group.
+using System.Numerics;
+using Study.Core.Io;
+using Study.Core.Model;
+using Study.Core.Units;
+
+namespace Study.Core.Faults;
+
+/// <summary>
+/// Per model branch (aligned with model.Branches): its positive-, negative-sequence and
+/// equivalent-frequency π branches, its zero-sequence path, and the clock lag (in 30° steps) of its
+/// To end behind its From end, which the phase voltages across a transformer need.
+/// </summary>
+internal sealed class SequenceBranches
+{
+    public required PuBranch[] Positive { get; init; }
+    public required PuBranch[] Negative { get; init; }
+    /// <summary>Positive sequence with every reactance at f_c/f (IEC 60909-0 §8.1.3 method C).</summary>
+    public required PuBranch[] EquivalentFrequency { get; init; }
+    /// <summary>Null when the zero sequence was not built (no earth fault asked for and data incomplete).</summary>
+    public ZeroSequencePath[]? Zero { get; init; }
+    public required int[] ClockLag { get; init; }
+
+    /// <param name="zeroRequired">True for an earth-fault study: missing zero-sequence data is an input error.</param>
+    public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes)
+    {
+        Network network = model.Network;
+        var transformers = network.Transformers.Where(t => t.InService).ToDictionary(t => t.Id);
+        var threeWinding = network.ThreeWindingTransformers.Where(t => t.InService).ToDictionary(t => t.Id);
+        var kThree = new Dictionary<string, (double Hv, double Mv, double Lv)>();
+        bool iec = method == FaultMethod.Iec60909;
+        int m = model.Branches.Count;
+        var pos = new PuBranch[m];
+        var neg = new PuBranch[m];
+        var eqf = new PuBranch[m];
+        var lag = new int[m];
+        var zero = new ZeroSequencePath[m];
+        InputException? zeroProblem = null;
+        var groups = new Dictionary<string, VectorGroup?>();
+
+        for (int k = 0; k < m; k++)
+        {
+            PuBranch b = model.Branches[k];
+            // IEC 60909 takes transformers at their rated ratio, i.e. the tap at its neutral position (from memory).
+            double ratio = iec && b.Tap is int tap ? model.Taps[tap].RatioAt(model.Taps[tap].Neutral) : b.Ratio;
+            double kT = 1.0;
+            VectorGroup? group = null;
+            if (b.Kind == BranchKind.Transformer && transformers.TryGetValue(b.Id, out var t))
+            {
+                if (iec)
+                {
+                    double? corrected = ImpedanceCorrection.TwoWinding(t, model.Buses[b.To].BaseKv);
+                    if (corrected is double value) kT = value;
+                    else notes.Add($"{t.Id}: per-unit data without a rating: K_T not applied");
+                }
+                group = GroupOf(b.Id, t.VectorGroup, false, groups, ref zeroProblem);
+                if (group is not null) lag[k] = group.LvClock;
+            }
+            else if (b.Kind == BranchKind.ThreeWindingTransformer && threeWinding.TryGetValue(b.Id, out var t3))
+            {
+                if (iec && !kThree.ContainsKey(t3.Id))
+                    kThree[t3.Id] = ImpedanceCorrection.ThreeWinding(t3, network.FindBus(t3.Mv)!.Kv, network.FindBus(t3.Lv)!.Kv);
+                if (iec)
+                {
+                    var s = kThree[t3.Id];
+                    kT = b.Winding == "hv" ? s.Hv : b.Winding == "mv" ? s.Mv : s.Lv;
+                }
+                group = GroupOf(b.Id, t3.VectorGroup, true, groups, ref zeroProblem);
+                // The star point is at the hv reference, so it leads the winding's terminal by that winding's clock.
+                if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
+            }
+
+            pos[k] = b with { Z = b.Z * kT, Ratio = ratio };
+            neg[k] = pos[k] with { ShiftRad = -b.ShiftRad };
+            eqf[k] = pos[k] with
+            {
+                Z = Faults.EquivalentFrequency.Series(pos[k].Z, fcOverF),
+                B = b.B * fcOverF,
+                MagnetisingY = Faults.EquivalentFrequency.Parallel(b.MagnetisingY, fcOverF),
+            };
+            if (zeroProblem is null)
+                zero[k] = ZeroPath(model, pos[k], b, kT, group, transformers, threeWinding, notes, ref zeroProblem);
+        }
+
+        if (zeroProblem is not null && zeroRequired) throw zeroProblem;
+        return new SequenceBranches
+        {
+            Positive = pos, Negative = neg, EquivalentFrequency = eqf, ClockLag = lag,
+            Zero = zeroProblem is null ? zero : null,
+        };
+    }
+
+    private static VectorGroup? GroupOf(string id, string? text, bool threeWinding, Dictionary<string, VectorGroup?> cache, ref InputException? problem)
+    {
+        if (cache.TryGetValue(id, out var known)) return known;
+        VectorGroup? group = null;
+        if (text is null)
+            problem ??= new InputException(
+                $"transformer {id} has no vector group: an earth-fault study needs it to decide the zero-sequence circuit (e.g. \"vectorGroup\": \"{(threeWinding ? "YNyn0d1" : "Dyn11")}\")",
+                elementId: id);
+        else
+        {
+            try { group = VectorGroup.Parse(text, id, threeWinding); }
+            catch (InputException e) { problem ??= e; }
+        }
+        cache[id] = group;
+        return group;
+    }
+
+    private static ZeroSequencePath ZeroPath(PerUnitModel model, PuBranch corrected, PuBranch b, double kT, VectorGroup? group,
+        Dictionary<string, Transformer> transformers, Dictionary<string, ThreeWindingTransformer> threeWinding,
+        List<string> notes, ref InputException? problem)
+    {
+        switch (b.Kind)
+        {
+            case BranchKind.Line:
+                if (b.Z0 is Complex z0Line) return ZeroSequencePath.Line(corrected, z0Line);
+                problem = new InputException(
+                    $"line {b.Id} has no zero-sequence data (r0OhmPerKm/x0OhmPerKm or r0Ohm/x0Ohm or r0Pu/x0Pu)", elementId: b.Id);
+                return ZeroSequencePath.Open;
+            case BranchKind.Transformer when group is not null:
+            {
+                var t = transformers[b.Id];
+                Complex z0 = (b.Z0 ?? b.Z) * kT;
+                Complex? hv = Neutral(t.Id, "hv", group.Hv, t.HvNeutral, model.Buses[b.From].BaseKv, model.BaseMva, notes, ref problem);
+                Complex? lv = Neutral(t.Id, "lv", group.Lv, t.LvNeutral, model.Buses[b.To].BaseKv, model.BaseMva, notes, ref problem);
+                return ZeroSequencePath.TwoWinding(corrected, z0, group, hv, lv);
+            }
+            case BranchKind.ThreeWindingTransformer when group is not null:
+            {
+                var t = threeWinding[b.Id];
+                var (connection, earthing) = b.Winding switch
+                {
+                    "hv" => (group.Hv, t.HvNeutral),
+                    "mv" => (group.Mv!.Value, t.MvNeutral),
+                    _ => (group.Lv, t.LvNeutral),
+                };
+                Complex? zn = Neutral(t.Id, b.Winding ?? "", connection, earthing, model.Buses[b.From].BaseKv, model.BaseMva, notes, ref problem);
+                return ZeroSequencePath.Winding(corrected, (b.Z0 ?? b.Z) * kT, connection, zn);
+            }
+            default:
+                return ZeroSequencePath.Open;
+        }
+    }
+
+    /// <summary>
+    /// Neutral impedance in pu of the terminal bus base, or null when the winding is not earthed: no N in
+    /// the vector group, or "grounded": false. An N winding without neutral data is taken as solidly earthed.
+    /// </summary>
+    private static Complex? Neutral(string id, string winding, WindingConnection connection, Earthing? earthing, double busKv, double baseMva,
+        List<string> notes, ref InputException? problem)
+    {
+        if (connection is not (WindingConnection.StarNeutral or WindingConnection.ZigzagNeutral)) return null;
+        if (earthing is null)
+        {
+            notes.Add($"{id}: {winding} neutral has no earthing data: taken as solidly earthed");
+            return Complex.Zero;
+        }
+        if (!earthing.Grounded) return null;
+        var zOhm = new Complex(earthing.ROhm, earthing.XOhm);
+        if (zOhm == Complex.Zero) return Complex.Zero;
+        if (!(busKv > 0))
+        {
+            problem ??= new InputException($"the {winding} neutral impedance is in ohm but the bus kV is not stated", elementId: id);
+            return null;
+        }
+        return zOhm / (busKv * busKv / baseMva);
+    }
+}

@@ -1,0 +1,125 @@
+// The bundled demo network end to end, and the input errors a fault study reports.
+using Study.Core.Faults;
+using Study.Core.Io;
+using Study.Core.Model;
+using Study.Core.Units;
+using static Study.Core.Tests.Faults.FaultNetworks;
+
+namespace Study.Core.Tests.Faults;
+
+public class DemoNetworkFaultTests
+{
+    private static FaultResult Scan(Network network) => FaultStudy.Run(PerUnitModel.Build(network));
+
+    [Fact]
+    public void Every_demo_bus_gets_three_phase_and_earth_fault_levels_and_every_breaker_a_duty()
+    {
+        var network = TestNetworks.Demo;
+        var result = Scan(network);
+        Assert.Equal(FaultStudy.Caution, result.Caution);
+        foreach (Bus bus in network.Buses)
+            foreach (FaultKind kind in new[] { FaultKind.ThreePhase, FaultKind.LineToEarth })
+            {
+                var f = result.At(bus.Id, kind);
+                Assert.True(double.IsFinite(f.IkKa!.Value) && f.IkKa > 0, $"{bus.Id} {kind}: I''k {f.IkKa}");
+                Assert.True(f.IpKa > f.IkKa * Math.Sqrt(2) && f.Kappa < 2, $"{bus.Id} {kind}: kappa {f.Kappa}");
+            }
+        Assert.Equal(network.Breakers.Count, result.Breakers.Count);
+        Assert.All(result.Breakers, b => Assert.True(b.DutyPercent > 0 && double.IsFinite(b.DutyPercent!.Value), b.Id));
+    }
+
+    // Physical monotonicity: a passive network with one more source can only see more fault current.
+    [Fact]
+    public void Fault_level_never_falls_when_a_source_is_added()
+    {
+        var with = TestNetworks.Demo;
+        var without = with with { Generators = with.Generators.Select(g => g with { InService = false }).ToList() };
+        var more = Scan(with);
+        var less = Scan(without);
+        foreach (ShortCircuitLevel f in less.Faults)
+            Assert.True(more.At(f.Bus, f.Kind).IkKa >= f.IkKa * (1 - 1e-12), $"{f.Bus} {f.Kind}");
+        Assert.True(more.At("MRG11", FaultKind.ThreePhase).IkKa > less.At("MRG11", FaultKind.ThreePhase).IkKa * 1.2);
+    }
+
+    [Fact]
+    public void Breaker_duty_is_the_larger_of_breaking_and_making_ratios()
+    {
+        var result = Scan(TestNetworks.Demo);
+        var cb = result.Breakers.Single(b => b.Id == "CB-CS11");
+        var worst = result.Faults.Where(f => f.Bus == "CS11").MaxBy(f => f.IkKa)!;
+        Assert.Equal(100 * worst.IkKa!.Value / 8, cb.BreakingPercent!.Value, 1e-9);
+        Assert.Equal(Math.Max(cb.BreakingPercent!.Value, cb.MakingPercent!.Value), cb.DutyPercent!.Value);
+        var expected = cb.DutyPercent > 100 ? DutyStatus.Over : cb.DutyPercent > 90 ? DutyStatus.Warning : DutyStatus.Ok;
+        Assert.Equal(expected, cb.Status);
+    }
+
+    [Fact]
+    public void A_breaker_without_ratings_reports_no_rating()
+    {
+        var demo = TestNetworks.Demo;
+        var network = demo with { Breakers = [new Breaker { Id = "CB-X", Bus = "QE33" }] };
+        Assert.Equal(DutyStatus.NoRating, Scan(network).Breakers.Single().Status);
+    }
+
+    [Fact]
+    public void Load_flow_method_gives_levels_close_to_the_iec_method_on_the_demo()
+    {
+        var model = PerUnitModel.Build(TestNetworks.Demo);
+        var iec = FaultStudy.Run(model, new FaultRequest { Kinds = [FaultKind.ThreePhase] });
+        var flow = FaultStudy.Run(model, new FaultRequest { Kinds = [FaultKind.ThreePhase], Method = FaultMethod.LoadFlow });
+        // c = 1.1 against pre-fault voltages near 1.0 pu: the IEC maximum is higher, by at most about 15 %.
+        foreach (ShortCircuitLevel f in flow.Faults)
+            Assert.InRange(iec.At(f.Bus, f.Kind).IkKa!.Value / f.IkKa!.Value, 0.95, 1.2);
+    }
+
+    [Fact]
+    public void Unknown_bus_is_an_input_error_naming_it()
+    {
+        var e = Assert.Throws<InputException>(() =>
+            FaultStudy.Run(PerUnitModel.Build(TestNetworks.Demo), new FaultRequest { Buses = ["NOWHERE"] }));
+        Assert.Equal("NOWHERE", e.ElementId);
+        Assert.Contains("NOWHERE", e.Message);
+    }
+
+    [Fact]
+    public void Line_without_zero_sequence_data_in_an_earth_fault_study_is_an_input_error_naming_it()
+    {
+        var demo = TestNetworks.Demo;
+        var network = demo with
+        {
+            Lines = demo.Lines.Select(l => l.Id == "RING-2" ? l with { R0OhmPerKm = null, X0OhmPerKm = null, B0UsPerKm = null } : l).ToList(),
+        };
+        var model = PerUnitModel.Build(network);
+        var e = Assert.Throws<InputException>(() => FaultStudy.Run(model));
+        Assert.Equal("RING-2", e.ElementId);
+        Assert.Contains("line RING-2 has no zero-sequence data (r0OhmPerKm/x0OhmPerKm or r0Ohm/x0Ohm or r0Pu/x0Pu)", e.Message);
+        // A three-phase study does not need the zero sequence.
+        var three = FaultStudy.Run(model, new FaultRequest { Kinds = [FaultKind.ThreePhase] });
+        Assert.All(three.Faults, f => Assert.Null(f.Z0Pu));
+    }
+
+    [Fact]
+    public void Transformer_without_vector_group_in_an_earth_fault_study_is_an_input_error_naming_it()
+    {
+        var demo = TestNetworks.Demo;
+        var network = demo with { Transformers = demo.Transformers.Select(t => t.Id == "CQ-T1" ? t with { VectorGroup = null } : t).ToList() };
+        var e = Assert.Throws<InputException>(() => Scan(network));
+        Assert.Equal("CQ-T1", e.ElementId);
+        Assert.Contains("vector group", e.Message);
+    }
+
+    // Kirchhoff at the faulted bus: the branch contributions and the local sources add up to the fault current.
+    [Fact]
+    public void Branch_contributions_at_a_bus_without_a_source_add_up_to_the_fault_current()
+    {
+        var result = FaultStudy.Run(PerUnitModel.Build(TestNetworks.Demo),
+            new FaultRequest { Buses = ["QE33"], Kinds = [FaultKind.ThreePhase] });
+        var f = result.Faults.Single();
+        Assert.Equal(2, f.Contributions.Count);
+        Assert.All(f.Contributions, c => Assert.Equal(ContributionDirection.IntoFault, c.Direction));
+        // Two ring feeders into QE33; their phasors are almost in phase, so magnitudes add to within a few per cent.
+        double sum = f.Contributions.Sum(c => c.IkKa!.Value);
+        Assert.InRange(sum / f.IkKa!.Value, 1.0 - 1e-9, 1.05);
+        Assert.Equal(0, f.Voltages[0].VaPu, 9);
+    }
+}
