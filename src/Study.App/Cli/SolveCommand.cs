@@ -1,4 +1,5 @@
 // `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape of DESIGN.md.
+using Study.App.Cli.Reports;
 using Study.Core.Io;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
@@ -11,19 +12,20 @@ public sealed class SolveCommand : Command
     public override string Name => "solve";
     public override string Summary => "solve the load flow (Newton-Raphson) and report voltages, flows, losses and violations";
     public override string Usage =>
-        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE]";
+        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--markdown FILE] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE]";
     public override IReadOnlyList<string> OptionHelp =>
     [
         "--scenario NAME         scale loads as the named scenario does (default: loads as entered)",
         "--json                  machine-readable result",
         "--csv DIR               write buses.csv, branches.csv, taps.csv, violations.csv into DIR",
+        "--markdown FILE         write the report as Markdown, with the inputs, to attach to a study note",
         "--tolerance X           largest P/Q mismatch accepted, pu (default 1e-8)",
         "--max-iterations N      Newton-Raphson iterations per solve (default 30)",
         "--no-q-limits           do not switch PV buses to PQ at their reactive limits",
         "--fixed-taps            hold on-load tap changers at the positions in the file",
         "--export-jacobian FILE  write the Jacobian of the last iteration (Matrix Market)",
     ];
-    protected override IEnumerable<string> ValueOptions => ["scenario", "csv", "tolerance", "max-iterations", "export-jacobian"];
+    protected override IEnumerable<string> ValueOptions => ["scenario", "csv", "markdown", "tolerance", "max-iterations", "export-jacobian"];
     protected override IEnumerable<string> Flags => ["json", "no-q-limits", "fixed-taps"];
 
     protected override int Execute(Arguments args, CommandContext context)
@@ -53,10 +55,10 @@ public sealed class SolveCommand : Command
                 + "rows: dP then dQ (dV for PV buses) of the unknown buses; columns: angle then |V|");
         if (args.Value("csv") is string dir)
             LoadFlowCsv.Write(result, dir);
-        if (args.Has("json"))
-            context.Out.Write(CliJson.Serialize(SolveJson.From(result, comparison)));
-        else
-            context.Out.Write(LoadFlowReport.Render(path, network, result, comparison));
+        var report = LoadFlowReport.Build(path, network, result, comparison, options);
+        if (args.Value("markdown") is string markdown)
+            ReportFiles.WriteMarkdown(markdown, report);
+        context.Out.Write(args.Has("json") ? CliJson.Serialize(SolveJson.From(result, comparison)) : PlainTextReport.Render(report));
         if (!result.Converged)
         {
             context.Err.WriteLine($"error: {path}: the load flow did not converge: {result.Message}");

@@ -16,7 +16,12 @@ public static class StudyCommand
         new ConvertCommand(),
         new SolveCommand(),
         new TapsCommand(),
+        new OutagesCommand(),
+        new CompareCommand(),
+        new FaultCommand(),
         new ExplainCommand(),
+        new GenerateCommand(),
+        new BenchCommand(),
     ];
 
     public static int Run(IReadOnlyList<string> args, CommandContext context)
@@ -32,7 +37,7 @@ public static class StudyCommand
         }
         try
         {
-            return command.Run(args.Skip(1).ToList(), context);
+            return command.Run(GenerateCommand.ExpandShortOptions(args.Skip(1).ToList()), context);
         }
         catch (UsageException e)
         {

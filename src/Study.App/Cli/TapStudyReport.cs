@@ -1,5 +1,7 @@
-// The readable report of `study taps`: the finding, a table per position and scenario, and a text chart.
+// The report of `study taps`: the finding, a table per position and scenario, and a text chart.
 using System.Text;
+using Study.App.Cli.Reports;
+using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
 using static Study.App.Cli.Format;
@@ -10,24 +12,29 @@ public static class TapStudyReport
 {
     private const int ChartWidth = 48;
 
-    public static string Render(string path, Network network, TapStudyResult r)
+    public static string Render(string path, Network network, TapStudyResult r) => PlainTextReport.Render(Build(path, network, r));
+
+    public static ReportDocument Build(string path, Network network, TapStudyResult r, LoadFlowOptions? options = null)
     {
-        var sb = new StringBuilder();
-        sb.Append($"Tap study: transformer {r.Transformer} in {LoadFlowReport.Title(network, path)}\n");
-        sb.Append($"positions {r.Min}..{r.Max} at {F(r.StepPercent, 2)} % a step (file position {r.FilePosition}); ");
-        sb.Append($"watching {string.Join(", ", r.WatchBuses)}; band ");
-        sb.Append(r.Band is { } b ? $"{F(b.Low, 3)}–{F(b.High, 3)} pu" : "each bus's vMin–vMax");
-        sb.Append($"; {(r.Scenarios.Count == 1 && r.Scenarios[0] is null ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios))}\n\n");
-        sb.Append($"Finding: {r.Finding}\n");
+        var doc = new ReportDocument($"Tap study: transformer {r.Transformer} in {LoadFlowReport.Title(network, path)}");
+        string band = r.Band is { } b ? $"{F(b.Low, 3)}–{F(b.High, 3)} pu" : "each bus's vMin–vMax";
+        string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0] is null ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios);
+        LoadFlowReport.AddInputs(doc, path, network, scenarios, options ?? LoadFlowOptions.Default);
+        doc.Input("transformer", $"{r.Transformer}, positions {r.Min}..{r.Max} at {F(r.StepPercent, 2)} % a step");
+        doc.Input("watched buses", string.Join(", ", r.WatchBuses));
+        doc.Input("band", band);
+        doc.Text($"positions {r.Min}..{r.Max} at {F(r.StepPercent, 2)} % a step (file position {r.FilePosition}); "
+               + $"watching {string.Join(", ", r.WatchBuses)}; band {band}; {scenarios}");
+        doc.SpacedText($"Finding: {r.Finding}");
         if (r.Recommended.Count > 0)
         {
-            var rec = new TextTable().Column("rank").Column("position").Column("worst margin pu");
+            var rec = new ReportTable { SpaceBefore = true }.Column("rank").Column("position").Column("worst margin pu");
             for (int i = 0; i < r.Recommended.Count; i++)
                 rec.Row(I(i + 1), I(r.Recommended[i].Position), F(r.Recommended[i].MarginPu, 4));
-            sb.Append('\n').Append(rec.Render("  "));
+            doc.Add(rec);
         }
 
-        var table = new TextTable().Column("position").Column("ratio").Left("scenario");
+        var table = new ReportTable().Column("position").Column("ratio").Left("scenario");
         foreach (string bus in r.WatchBuses) table.Column($"{bus} pu");
         table.Column("system min pu").Left("at").Column("system max pu").Left("at").Column("loss MW").Column("violations").Column("margin pu");
         foreach (TapStudyPoint p in r.Points)
@@ -45,9 +52,8 @@ public static class TapStudyReport
             }
             table.Row(cells.ToArray());
         }
-        sb.Append("\nEvery position (▼ below the band, ▲ above)\n").Append(table.Render("  "));
-        sb.Append('\n').Append(Chart(r));
-        return sb.ToString();
+        doc.Heading("Every position (▼ below the band, ▲ above)").Add(table);
+        return doc.Add(new ReportFigure(Chart(r)) { SpaceBefore = true });
     }
 
     /// <summary>

@@ -1,4 +1,5 @@
 // `study taps FILE --transformer ID`: every tap position in every scenario, and the positions that hold the band.
+using Study.App.Cli.Reports;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -10,7 +11,7 @@ public sealed class TapsCommand : Command
     public override string Name => "taps";
     public override string Summary => "solve every tap position of one transformer and recommend the positions that hold the band";
     public override string Usage =>
-        "study taps FILE --transformer ID [--watch BUS ...] [--band LO,HI] [--scenario NAME | --all-scenarios] [--hold-other-taps] [--json]";
+        "study taps FILE --transformer ID [--watch BUS ...] [--band LO,HI] [--scenario NAME | --all-scenarios] [--hold-other-taps] [--json] [--csv DIR] [--markdown FILE]";
     public override IReadOnlyList<string> OptionHelp =>
     [
         "--transformer ID   the transformer whose tap positions are studied",
@@ -19,8 +20,10 @@ public sealed class TapsCommand : Command
         "--scenario NAME    one scenario; --all-scenarios (the default when the network has scenarios) solves each",
         "--hold-other-taps  hold other on-load tap changers at their file positions (default: they regulate)",
         "--json             machine-readable result",
+        "--csv DIR          write positions.csv and recommended.csv into DIR",
+        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
     ];
-    protected override IEnumerable<string> ValueOptions => ["transformer", "watch*", "band", "scenario"];
+    protected override IEnumerable<string> ValueOptions => ["transformer", "watch*", "band", "scenario", "csv", "markdown"];
     protected override IEnumerable<string> Flags => ["json", "all-scenarios", "hold-other-taps"];
 
     protected override int Execute(Arguments args, CommandContext context)
@@ -47,7 +50,10 @@ public sealed class TapsCommand : Command
             HoldOtherTaps = args.Has("hold-other-taps"),
         };
         TapStudyResult result = TapStudy.Run(network, request, LoadFlowOptions.Default);
-        context.Out.Write(args.Has("json") ? CliJson.Serialize(TapsJson.From(result)) : TapStudyReport.Render(path, network, result));
+        var report = TapStudyReport.Build(path, network, result, LoadFlowOptions.Default);
+        if (args.Value("csv") is string dir) TapStudyCsv.Write(result, dir);
+        if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
+        context.Out.Write(args.Has("json") ? CliJson.Serialize(TapsJson.From(result)) : PlainTextReport.Render(report));
         return result.Points.All(p => !p.Converged) ? ExitCode.NoConvergence : ExitCode.Done;
     }
 }

@@ -13,13 +13,25 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(CheckJson))]
 [JsonSerializable(typeof(SolveJson))]
 [JsonSerializable(typeof(TapsJson))]
+[JsonSerializable(typeof(OutagesJson))]
+[JsonSerializable(typeof(List<OutagesJson>))]
+[JsonSerializable(typeof(CompareJson))]
+[JsonSerializable(typeof(FaultJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson
 {
+    // Output is read by programs and people alike: keep apostrophes, degree signs and the like as
+    // written instead of \u escapes (the text never lands inside HTML).
+    private static readonly JsonSerializerOptions Options = new(CliJsonContext.Default.Options)
+    {
+        Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+        TypeInfoResolver = CliJsonContext.Default,
+    };
+
     public static string Serialize<T>(T value)
     {
-        var info = (JsonTypeInfo<T>)CliJsonContext.Default.GetTypeInfo(typeof(T))!;
+        var info = (JsonTypeInfo<T>)Options.GetTypeInfo(typeof(T));
         return JsonSerializer.Serialize(value, info) + "\n";
     }
 }

@@ -1,0 +1,40 @@
+// A report built once by a command and rendered as plain text (the terminal) or Markdown (a study note).
+namespace Study.App.Cli.Reports;
+
+/// <summary>
+/// Title, the inputs that produced the results, and the blocks of results in order. The inputs
+/// are listed only in the Markdown rendering: on the terminal the command line is in view, and the
+/// title line already names the file and scenario.
+/// </summary>
+public sealed class ReportDocument(string title)
+{
+    private readonly List<ReportInput> inputs = [];
+    private readonly List<ReportBlock> blocks = [];
+
+    public string Title { get; } = title;
+    public IReadOnlyList<ReportInput> Inputs => inputs;
+    public IReadOnlyList<ReportBlock> Blocks => blocks;
+
+    public ReportDocument Input(string name, string value)
+    {
+        inputs.Add(new ReportInput(name, value));
+        return this;
+    }
+
+    public ReportDocument Add(ReportBlock block)
+    {
+        blocks.Add(block);
+        return this;
+    }
+
+    public ReportDocument Heading(string text) => Add(new ReportHeading(text));
+
+    public ReportDocument Text(params string[] lines) => Add(new ReportText(lines));
+
+    public ReportDocument SpacedText(params string[] lines) => Add(new ReportText(lines) { SpaceBefore = true });
+
+    public ReportDocument List(IEnumerable<string> items) => Add(new ReportList(items.ToList()));
+}
+
+/// <summary>One input of a study: "file", "scenario", "options" and the like.</summary>
+public sealed record ReportInput(string Name, string Value);

@@ -1,0 +1,69 @@
+// --markdown and --csv on solve and taps: one report, rendered as plain text on the terminal and as Markdown in a file.
+using Study.App.Cli;
+using Study.App.Cli.Reports;
+
+namespace Study.App.Tests.Cli;
+
+public class ReportCommandsTests
+{
+    [Fact]
+    public void Solve_markdown_holds_the_same_tables_as_the_terminal_report_and_lists_the_inputs()
+    {
+        using var dir = new TempDirectory();
+        string md = dir.File("notes/solve.md");
+        CliOutcome run = CliRun.Run("solve", DemoNetworks.Demo, "--scenario", "winter-peak", "--markdown", md);
+        Assert.Equal(0, run.ExitCode);
+        Assert.StartsWith("Load flow: ", run.Out);
+        Assert.Contains("\nBuses (9)   ▼ below vMin, ▲ above vMax\n  bus ", run.Out);
+        Assert.Empty(dir.Leftovers());
+
+        string text = File.ReadAllText(md);
+        Assert.StartsWith("# Load flow: ", text);
+        Assert.Contains("- **scenario:** scenario winter-peak", text);
+        Assert.Contains("- **options:** Newton-Raphson, tolerance 1.0e-8 pu", text);
+        Assert.Contains("## Violations (0)", text);
+        var tables = ReportChecks.MarkdownTables(text);
+        Assert.Equal([(11, 9), (12, 10), (5, 4)], tables);
+    }
+
+    [Fact]
+    public void Taps_csv_and_markdown_carry_every_position_in_every_scenario()
+    {
+        using var dir = new TempDirectory();
+        CliOutcome run = CliRun.Run("taps", DemoNetworks.Demo, "--transformer", "CQ-T1", "--csv", dir.Path, "--markdown", dir.File("taps.md"));
+        Assert.Equal(0, run.ExitCode);
+        Assert.Equal(["position", "ratio", "scenario", "converged", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
+            "vMinPu", "vMinBus", "vMaxPu", "vMaxBus", "lossMw", "violations", "marginPu"], ReportChecks.CsvHeader(dir.File("positions.csv")));
+        Assert.Equal(1 + 5 * 2, File.ReadAllLines(dir.File("positions.csv")).Length);
+        Assert.Equal(["rank", "position", "marginPu"], ReportChecks.CsvHeader(dir.File("recommended.csv")));
+        string text = File.ReadAllText(dir.File("taps.md"));
+        Assert.Contains("```text\nWatched voltage against position", text);
+        // position, ratio, scenario, three watched buses, then seven system columns; 5 positions × 2 scenarios.
+        Assert.Contains((13, 10), ReportChecks.MarkdownTables(text));
+    }
+
+    [Fact]
+    public void Fault_markdown_states_the_caution_before_any_fault_level()
+    {
+        using var dir = new TempDirectory();
+        CliOutcome run = CliRun.Run("fault", DemoNetworks.Demo, "--markdown", dir.File("fault.md"));
+        Assert.Equal(0, run.ExitCode);
+        string text = File.ReadAllText(dir.File("fault.md"));
+        int caution = text.IndexOf("CAUTION: ", StringComparison.Ordinal);
+        Assert.InRange(caution, 0, text.IndexOf("I''k", StringComparison.Ordinal));
+        Assert.Contains("- **method:** IEC 60909", text);
+        Assert.StartsWith("CAUTION: ", run.Out);
+    }
+
+    [Fact]
+    public void Markdown_escapes_markup_in_cells_so_columns_stay_aligned()
+    {
+        var table = new ReportTable().Left("id").Column("value");
+        table.Row("LD_A|B*", "1.0");
+        var doc = new ReportDocument("ids with markup").Add(table);
+        string md = MarkdownReport.Render(doc);
+        Assert.Equal([(2, 1)], ReportChecks.MarkdownTables(md));
+        Assert.Contains(@"LD\_A\|B\*", md);
+        Assert.Equal("ids with markup\n  id       value\n  -------  -----\n  LD_A|B*    1.0\n", PlainTextReport.Render(doc));
+    }
+}
