@@ -65,10 +65,16 @@ public static partial class NetworkFile
         }
         if (network is null) throw new InputException("the file holds 'null', not a network", fileName, 1, 1);
         if (network.Format != Network.FormatName)
-            throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName);
+        {
+            (int line, int column) = TopLevelValue(utf8, "format");
+            throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName, line, column);
+        }
         if (network.Version > Network.CurrentVersion)
+        {
+            (int line, int column) = TopLevelValue(utf8, "version");
             throw new InputException(
-                $"file version {network.Version} is newer than this program reads ({Network.CurrentVersion})", fileName);
+                $"file version {network.Version} is newer than this program reads ({Network.CurrentVersion})", fileName, line, column);
+        }
         return network with { Source = new SourceMap(fileName, ElementLines(utf8)) };
     }
 
@@ -125,6 +131,23 @@ public static partial class NetworkFile
             }
         }
         return lines;
+    }
+
+    /// <summary>Line and column of the value of a top-level key (the last one, as the reader keeps the last); 1, 1 when absent.</summary>
+    private static (int Line, int Column) TopLevelValue(byte[] utf8, string key)
+    {
+        (int, int) found = (1, 1);
+        var reader = new Utf8JsonReader(utf8, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip });
+        while (reader.Read())
+        {
+            if (reader.CurrentDepth != 1 || reader.TokenType != JsonTokenType.PropertyName || !reader.ValueTextEquals(key)) continue;
+            reader.Read();
+            int line = LineAt(utf8, reader.TokenStartIndex);
+            long lineStart = reader.TokenStartIndex;
+            while (lineStart > 0 && utf8[lineStart - 1] != (byte)'\n') lineStart--;
+            found = (line, (int)(reader.TokenStartIndex - lineStart) + 1);
+        }
+        return found;
     }
 
     private static int LineAt(byte[] utf8, long offset)

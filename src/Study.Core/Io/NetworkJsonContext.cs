@@ -12,6 +12,7 @@ namespace Study.Core.Io;
     WriteIndented = true,
     IndentSize = 2,
     AllowTrailingCommas = false,
-    ReadCommentHandling = System.Text.Json.JsonCommentHandling.Skip)]
+    ReadCommentHandling = System.Text.Json.JsonCommentHandling.Skip,
+    Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapSide>)])]
 [JsonSerializable(typeof(Network))]
 internal sealed partial class NetworkJsonContext : JsonSerializerContext;
