@@ -11,11 +11,12 @@ public static class HelpDialog
     public static string Text()
     {
         var lines = new List<string>();
+        int titleWidth = TuiCommands.All.Max(c => c.Title.Replace("_", "", StringComparison.Ordinal).Length);
         foreach (string menu in TuiCommands.Menus)
         {
             lines.Add(menu);
             foreach (TuiCommand c in TuiCommands.All.Where(c => c.Menu == menu))
-                lines.Add($"  {c.KeyText,-18} {c.Title.Replace("_", "", StringComparison.Ordinal),-16} {c.Help}");
+                lines.Add($"  {c.KeyText,-18} {c.Title.Replace("_", "", StringComparison.Ordinal).PadRight(titleWidth)} {c.Help}");
         }
         lines.Add("Moving around");
         foreach ((string keys, string help) in TuiCommands.Navigation) lines.Add($"  {keys,-18} {help}");
@@ -28,6 +29,8 @@ public static class HelpDialog
         var text = new TextPane { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(1), Content = Text() };
         dialog.Add(text);
         dialog.AddButton(new Button { Text = "OK" });
+        // The text takes the focus so that arrows and PgUp/PgDn scroll it at once; Enter or Esc closes.
+        text.SetFocus();
         app.Run(dialog);
         dialog.Dispose();
     }

@@ -12,6 +12,7 @@ public sealed class MainCommands(MainWindow main)
 {
     private IApplication App => main.App;
     private EditSession Session => main.Session;
+    private StudyCommands Studies { get; } = new(main);
 
     /// <summary>The application-wide key handler: commands only while the main window is on top.</summary>
     public void OnKeyDown(object? sender, Key key)
@@ -21,6 +22,12 @@ public sealed class MainCommands(MainWindow main)
         {
             key.Handled = true; // Esc must not close the main window; it stops a running study.
             if (main.Runner.IsRunning) main.Runner.Cancel();
+            return;
+        }
+        if (key == Key.Tab || key == Key.Tab.WithShift)
+        {
+            key.Handled = true;
+            main.FocusNextPane(back: key == Key.Tab.WithShift);
             return;
         }
         if (TuiCommands.ForKey(key) is { } command)
@@ -48,10 +55,9 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.Undo: Session.Undo(); break;
             case TuiAction.Redo: Session.Redo(); break;
             case TuiAction.LoadFlow: LoadFlow(); break;
-            case TuiAction.Fault:
-                Prompts.Tell(App, "Fault study", "Fault studies are not in this build yet.\n\n" + ResultsView.FaultCaution);
-                break;
-            case TuiAction.TapStudy: Prompts.Tell(App, "Tap study", "The tap study is not in this build yet."); break;
+            case TuiAction.Fault: Studies.Fault(); break;
+            case TuiAction.TapStudy: Studies.TapStudy(); break;
+            case TuiAction.ApplyTap: Studies.ApplyRecommendedTap(); break;
             case TuiAction.Scenario: ChooseScenario(); break;
             case TuiAction.Cancel: main.Runner.Cancel(); break;
             case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
@@ -60,6 +66,7 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.ShowFaults: main.Results.Value = main.Results.FaultsTab; break;
             case TuiAction.ShowTapStudy: main.Results.Value = main.Results.TapStudyTab; break;
             case TuiAction.ShowOneLine: main.Results.Value = main.Results.OneLineTab; break;
+            case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
             case TuiAction.ShowVoltageChart: main.Results.Value = main.Results.ChartTab; break;
             case TuiAction.Help: HelpDialog.Run(App); break;
         }
@@ -126,7 +133,7 @@ public sealed class MainCommands(MainWindow main)
             : 1 + Session.Network.Scenarios.ToList().FindIndex(s => s.Name == Session.ActiveScenario);
         if (Prompts.Choose(App, "Scenario", names, current) is not int chosen) return;
         Session.ActiveScenario = chosen == 0 ? null : Session.Network.Scenarios[chosen - 1].Name;
-        main.RefreshStatus();
+        main.Refresh();
     }
 
     private void Open()

@@ -17,8 +17,10 @@ public sealed class MainWindow : Window
 {
     private readonly ListView kindList = new() { Width = Dim.Fill(), Height = Dim.Fill() };
     private readonly FrameView listFrame = new() { X = 0, Y = 1, Height = Dim.Fill(1) };
-    private readonly FrameView tableFrame = new() { Y = 1, Width = Dim.Fill(), Height = Dim.Percent(42) };
-    private readonly FrameView resultsFrame = new() { Title = "Detail and results", Width = Dim.Fill(), Height = Dim.Fill(1) };
+    private readonly FrameView tableFrame = new() { Y = 1, Width = Dim.Fill() };
+    // No frame of its own: the tabs draw their borders, and at 80×24 every row counts.
+    private readonly View resultsFrame = new() { Width = Dim.Fill(), Height = Dim.Fill(1), CanFocus = true, TabStop = TabBehavior.TabGroup };
+    private bool enlarged;
     private ElementKind kind = ElementKind.Bus;
 
     public MainWindow(IApplication app, EditSession session)
@@ -30,6 +32,8 @@ public sealed class MainWindow : Window
         Commands = new MainCommands(this);
 
         listFrame.Width = Dim.Func(_ => app.Screen.Width >= 120 ? 28 : 22);
+        // A short screen keeps five table rows and gives the rest to the results (nine buses fit at 80×24).
+        tableFrame.Height = Dim.Func(_ => enlarged ? 0 : app.Screen.Height <= 30 ? 7 : app.Screen.Height * 42 / 100);
         tableFrame.X = Pos.Right(listFrame);
         resultsFrame.X = Pos.Right(listFrame);
         resultsFrame.Y = Pos.Bottom(tableFrame);
@@ -59,6 +63,20 @@ public sealed class MainWindow : Window
     public LoadFlowResult? LastResult { get; private set; }
     public ElementKind SelectedKind => kind;
 
+    /// <summary>True while the results take the whole right side (the element table is hidden).</summary>
+    public bool EnlargeResults
+    {
+        get => enlarged;
+        set
+        {
+            enlarged = value;
+            tableFrame.Visible = !value;
+            if (value) Results.SetFocus();
+            else Table.SetFocus();
+            SetNeedsLayout();
+        }
+    }
+
     /// <summary>The id of the element under the table cursor, if any.</summary>
     public string? SelectedId
     {
@@ -77,6 +95,8 @@ public sealed class MainWindow : Window
         Session = next;
         Session.Changed += Refresh;
         ShowResult(null);
+        Results.FaultResult = null;
+        Results.TapStudyResult = null;
         Refresh();
     }
 
@@ -84,7 +104,24 @@ public sealed class MainWindow : Window
     {
         LastResult = result;
         Results.Result = result;
+        RefreshOneLine();
         RefreshStatus();
+    }
+
+    /// <summary>Tab and Shift+Tab move between the three panes: element kinds, the kind's table, the results.</summary>
+    public void FocusNextPane(bool back)
+    {
+        View[] panes = enlarged ? [kindList, Results] : [kindList, Table, Results];
+        int at = Array.FindIndex(panes, p => p.HasFocus);
+        int next = at < 0 ? 0 : (at + (back ? panes.Length - 1 : 1)) % panes.Length;
+        panes[next].SetFocus();
+    }
+
+    /// <summary>Shows a study's tab; on a short screen the results take the element table's rows too (Alt+R gives them back).</summary>
+    public void ShowStudyTab(View tab)
+    {
+        if (App.Screen.Height <= 30 && !enlarged) EnlargeResults = true;
+        Results.Value = tab;
     }
 
     public void Select(ElementKind k, string? id)
@@ -105,11 +142,20 @@ public sealed class MainWindow : Window
         string name = Session.Path is null ? "untitled" : System.IO.Path.GetFileName(Session.Path);
         listFrame.Title = (Session.Dirty ? "*" : "") + name;
         ShowKind(kind);
+        RefreshOneLine();
         RefreshStatus();
     }
 
     public void RefreshStatus() =>
         Status.Summary = StatusLine.Summary(LastResult, Session.ActiveScenario, Runner.Progress);
+
+    /// <summary>The one-line view shows the network as edited, with the last solve's values when it is of this network.</summary>
+    private void RefreshOneLine()
+    {
+        Network n = Session.Network;
+        Scenario? scenario = Session.ActiveScenario is { } name ? n.FindScenario(name) : null;
+        Results.OneLine = OneLineLayout.Build(n, LastResult, scenario);
+    }
 
     private ElementKind SelectedKindFromList()
     {

@@ -33,7 +33,7 @@ public static class Prompts
     /// <summary>Index of the chosen item, null on Esc.</summary>
     public static int? Choose(IApplication app, string title, IReadOnlyList<string> items, int selected)
     {
-        var dialog = new Dialog { Title = title, Width = Math.Min(60, Math.Max(30, items.Max(i => i.Length) + 8)), Height = Math.Min(20, items.Count + 6) };
+        var dialog = new Dialog { Title = title, Width = Math.Min(60, Math.Max(30, items.Max(i => i.Length) + 8)), Height = Math.Min(20, items.Count + 7) };
         var list = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(1) };
         list.SetSource(new System.Collections.ObjectModel.ObservableCollection<string>(items));
         list.SelectedItem = selected;

@@ -1,5 +1,7 @@
 // The detail/result area: tabs for the selected element and for each kind of study result.
+using Study.Core.Faults;
 using Study.Core.LoadFlow;
+using Study.Core.Studies;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
@@ -10,15 +12,16 @@ namespace Study.App.Tui;
 /// <summary>Tabs: Detail, Buses, Branches, Faults, Tap study, One-line, Voltage chart.</summary>
 public sealed class ResultsView : Tabs
 {
-    public const string FaultCaution =
-        "Fault levels, equipment duty and protection settings from this program are planning estimates; " +
-        "they must be confirmed by a licensed protection engineer against the governing local code and the " +
-        "utility's data before equipment is specified, set or energised.";
+    /// <summary>The caution every fault screen carries; the engine owns the wording.</summary>
+    public const string FaultCaution = FaultStudy.Caution;
 
     private readonly TextPane detail = new();
     private readonly TableView buses = ResultTable(ResultTables.BusHeaders);
     private readonly TableView branches = ResultTable(ResultTables.BranchHeaders);
     private readonly VoltageChartView chart = new();
+    private readonly FaultView faults = new();
+    private readonly TapStudyView tapStudy = new();
+    private readonly OneLineView oneLine = new();
     private LoadFlowResult? result;
 
     public ResultsView()
@@ -28,9 +31,9 @@ public sealed class ResultsView : Tabs
         DetailTab = Tab("Detail", detail);
         BusesTab = Tab("Buses", buses);
         BranchesTab = Tab("Branches", branches);
-        FaultsTab = Tab("Faults", Message("No fault study yet (F7).\n\n" + FaultCaution));
-        TapStudyTab = Tab("Tap study", Message("No tap study yet (F8)."));
-        OneLineTab = Tab("One-line", Message("The one-line view is not in this build yet."));
+        FaultsTab = Tab("Faults", faults);
+        TapStudyTab = Tab("Tap study", tapStudy);
+        OneLineTab = Tab("One-line", oneLine);
         ChartTab = Tab("Voltage chart", chart);
         buses.Style.RowColorGetter = args => BusRowScheme(args.RowIndex);
     }
@@ -57,6 +60,24 @@ public sealed class ResultsView : Tabs
         }
     }
 
+    public FaultResult? FaultResult
+    {
+        get => faults.Result;
+        set => faults.Result = value;
+    }
+
+    public TapStudyResult? TapStudyResult
+    {
+        get => tapStudy.Result;
+        set => tapStudy.Result = value;
+    }
+
+    public IReadOnlyList<OneLineRow> OneLine
+    {
+        get => oneLine.Rows;
+        set => oneLine.Rows = value;
+    }
+
     public void ShowDetail(string text) => detail.Content = text;
 
     private Scheme? BusRowScheme(int row)
@@ -77,9 +98,8 @@ public sealed class ResultsView : Tabs
         return tab;
     }
 
-    private static TextPane Message(string text) => new() { Content = text };
-
-    private static TableView ResultTable(string[] headers)
+    /// <summary>A read-only table in the results style: full-row cursor, no outer lines.</summary>
+    public static TableView ResultTable(string[] headers)
     {
         var table = new TableView { Table = TextTable.Empty(headers), Width = Dim.Fill(), Height = Dim.Fill(), FullRowSelect = true };
         table.Style.ShowHorizontalHeaderOverline = false;

@@ -14,6 +14,8 @@ public static class StatusLine
         string scen = "scenario " + (scenario ?? "base");
         if (running is not null) return $"{running}  Esc cancels │ {scen}";
         if (result is null) return $"not solved │ {scen}";
+        // After a scenario switch the shown results are still the old scenario's until F5.
+        if (result.Scenario != scenario) scen += $" (shown: {result.Scenario ?? "base"})";
         var inv = CultureInfo.InvariantCulture;
         if (!result.Converged)
             return $"NOT CONVERGED after {result.Iterations} it (worst bus {result.WorstBus ?? "?"}) │ {scen}";

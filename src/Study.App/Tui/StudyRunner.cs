@@ -11,24 +11,26 @@ public sealed class StudyRunner(IApplication app)
 {
     private static readonly string[] Spinner = ["⠋", "⠙", "⠹", "⠸", "⠼", "⠴", "⠦", "⠧", "⠇", "⠏"];
     private CancellationTokenSource? cancel;
+    private Func<double>? fraction;
     private string title = "";
     private int frame;
 
     public bool IsRunning => cancel is not null;
 
-    /// <summary>"Load flow ⠹ 1.2 s" while running; null otherwise.</summary>
+    /// <summary>"Load flow ⠹ 1.2 s" (or "Tap study ⠹ 40 % 1.2 s") while running; null otherwise.</summary>
     public string? Progress { get; private set; }
 
     /// <summary>Raised on the UI thread when a study starts, ticks or ends.</summary>
     public event Action? StateChanged;
 
     /// <summary>Starts <paramref name="work"/>; false when a study is already running.</summary>
-    public bool Start<T>(string studyTitle, Func<CancellationToken, T> work, Action<T> done, Action<string> failed)
+    public bool Start<T>(string studyTitle, Func<CancellationToken, T> work, Action<T> done, Action<string> failed, Func<double>? fraction = null)
     {
         if (cancel is not null) return false;
         var source = new CancellationTokenSource();
         cancel = source;
         title = studyTitle;
+        this.fraction = fraction;
         frame = 0;
         DateTime started = DateTime.UtcNow;
         Tick(started);
@@ -57,7 +59,9 @@ public sealed class StudyRunner(IApplication app)
     private void Tick(DateTime started)
     {
         double seconds = (DateTime.UtcNow - started).TotalSeconds;
-        Progress = $"{title} {Spinner[frame % Spinner.Length]} {seconds.ToString("0.0", System.Globalization.CultureInfo.InvariantCulture)} s";
+        var inv = System.Globalization.CultureInfo.InvariantCulture;
+        string done = fraction is null ? "" : $" {(fraction() * 100).ToString("0", inv)} %";
+        Progress = $"{title} {Spinner[frame % Spinner.Length]}{done} {seconds.ToString("0.0", inv)} s";
         StateChanged?.Invoke();
     }
 

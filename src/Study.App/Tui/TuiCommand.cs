@@ -8,8 +8,8 @@ public enum TuiAction
 {
     Open, Save, SaveAs, Quit,
     Add, Edit, Delete, Duplicate, Undo, Redo,
-    LoadFlow, Fault, TapStudy, Scenario, Cancel,
-    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOneLine, ShowVoltageChart,
+    LoadFlow, Fault, TapStudy, ApplyTap, Scenario, Cancel,
+    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOneLine, ShowVoltageChart, EnlargeResults,
     Help,
 }
 
@@ -37,6 +37,7 @@ public static class TuiCommands
         new(TuiAction.LoadFlow, "Study", "_Load flow", "Solve the load flow in the active scenario", Key.F5),
         new(TuiAction.Fault, "Study", "_Fault…", "Fault at a bus or at all buses", Key.F7),
         new(TuiAction.TapStudy, "Study", "_Tap study…", "Every tap position of a transformer in every scenario", Key.F8),
+        new(TuiAction.ApplyTap, "Study", "_Apply recommended tap", "Set the studied transformer to the best position of the last tap study (undoable)", Key.P.WithAlt),
         new(TuiAction.Scenario, "Study", "_Scenario…", "Choose the scenario studies run in", Key.N.WithAlt),
         new(TuiAction.Cancel, "Study", "_Cancel study", "Stop the study that is running", Key.Esc),
         new(TuiAction.ShowDetail, "View", "_Detail", "Selected element: fields, problems, per-unit values", Key.D1.WithAlt),
@@ -46,6 +47,7 @@ public static class TuiCommands
         new(TuiAction.ShowTapStudy, "View", "_Tap study", "Tap-study results", Key.D5.WithAlt),
         new(TuiAction.ShowOneLine, "View", "_One-line", "Text one-line view of the network", Key.D6.WithAlt),
         new(TuiAction.ShowVoltageChart, "View", "_Voltage chart", "Bar chart of bus voltages against the band", Key.D7.WithAlt),
+        new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Give the results the whole right side, or give the table back", Key.R.WithAlt),
         new(TuiAction.Help, "Help", "_Keys", "This list of keys", Key.F1),
     ];
 
