@@ -9,14 +9,16 @@ namespace Study.Core.Numerics;
 
 public sealed partial class SparseLu<T>
 {
-    // Factorises a from scratch in the symbolic column order, choosing pivots. During the loop L's
-    // row indices are rows of A; they are renumbered to pivot order at the end.
+    // Factorises a from scratch in the symbolic column order, choosing pivots. During the loop rows
+    // are numbered by the symbolic order too (row i of A is row qinv[i]), so with diagonal pivots
+    // the accumulator is touched in nearly the order the factors are stored, which keeps it in
+    // cache; L's rows are renumbered to the actual pivot order at the end.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private bool FactorWithPivoting(CscMatrix<T> a, out int singularColumn)
     {
         int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder;
         T[] ax = a.Values;
-        int[] lpl = lp, upl = up, pinvl = pinv, xil = xi;
+        int[] lpl = lp, upl = up, pinvl = rowPivot, qinvl = qinv, xil = xi;
         int[] lil = li, uil = ui;
         T[] lxl = lx, uxl = ux, xl = x;
         double tol = Options.PivotTolerance, singularTol = Options.SingularPivotTolerance;
@@ -50,7 +52,7 @@ public sealed partial class SparseLu<T>
             double columnMax = 0;
             for (int p = ap[col]; p < ap[col + 1]; p++)
             {
-                xl[ai[p]] += ax[p];
+                xl[qinvl[ai[p]]] += ax[p];
                 double m = Scalar.Magnitude(ax[p]);
                 if (m > columnMax) columnMax = m;
             }
@@ -61,7 +63,8 @@ public sealed partial class SparseLu<T>
                 if (jnew < 0) continue;
                 T xj = xl[j];
                 if (T.IsZero(xj)) continue;
-                for (int p = lpl[jnew]; p < lpl[jnew + 1]; p++) xl[lil[p]] -= lxl[p] * xj;
+                int start = lpl[jnew], length = lpl[jnew + 1] - start;
+                SubtractScaled(xl, lil.AsSpan(start, length), lxl.AsSpan(start, length), xj);
             }
 
             // Pivot: the largest candidate, unless the diagonal is within tol of it (cs_lu).
@@ -91,7 +94,8 @@ public sealed partial class SparseLu<T>
                 singularColumn = col;
                 return false;
             }
-            if (pinvl[col] < 0 && Scalar.Magnitude(xl[col]) >= amax * tol) ipiv = col;
+            // The diagonal entry of column q[k] sits in row k of this numbering.
+            if (pinvl[k] < 0 && Scalar.Magnitude(xl[k]) >= amax * tol) ipiv = k;
 
             T pivot = xl[ipiv];
             uil[unz] = k;
@@ -113,19 +117,21 @@ public sealed partial class SparseLu<T>
         lpl[n] = lnz;
         upl[n] = unz;
         for (int p = 0; p < lnz; p++) lil[p] = pinvl[lil[p]];
+        for (int i = 0; i < n; i++) pinv[i] = pinvl[qinvl[i]];
         singularColumn = -1;
         return true;
     }
 
     // xi[top..n-1] = nodes reachable from the pattern of A(:,col) in the graph of L, in topological
-    // order (Davis 2006, §3.2, cs_reach). Nodes are rows of A; a row not yet pivotal has no edges.
+    // order (Davis 2006, §3.2, cs_reach). Nodes are rows in symbolic order; a row not yet pivotal
+    // has no edges.
     private int Reach(int col, int[] ap, int[] ai, int[] lil, int stamp)
     {
-        int[] markl = mark;
+        int[] markl = mark, qinvl = qinv;
         int top = n;
         for (int p = ap[col]; p < ap[col + 1]; p++)
         {
-            int i = ai[p];
+            int i = qinvl[ai[p]];
             if (markl[i] != stamp) top = DepthFirst(i, top, lil, stamp);
         }
         return top;
@@ -136,7 +142,7 @@ public sealed partial class SparseLu<T>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int DepthFirst(int j, int top, int[] lil, int stamp)
     {
-        int[] lpl = lp, lpendl = lpend, pinvl = pinv, xil = xi, stack = pstack, markl = mark;
+        int[] lpl = lp, lpendl = lpend, pinvl = rowPivot, xil = xi, stack = pstack, markl = mark;
         int head = 0;
         xil[0] = j;
         while (head >= 0)
@@ -173,7 +179,7 @@ public sealed partial class SparseLu<T>
     // may stop at the pivotal ones. They are moved to the front and lpend[j] marks where they end.
     private void Prune(int pivotRow, int uStart, int uEnd, int[] lil, T[] lxl)
     {
-        int[] lpl = lp, lpendl = lpend, pinvl = pinv, uil = ui;
+        int[] lpl = lp, lpendl = lpend, pinvl = rowPivot, uil = ui;
         for (int pu = uStart; pu < uEnd; pu++)
         {
             int j = uil[pu];
@@ -198,6 +204,15 @@ public sealed partial class SparseLu<T>
             }
             lpendl[j] = tail;
         }
+    }
+
+    // x[rows] -= values·factor: the one update both the factorisation and the refactorisation spend
+    // their time in (the column operation of Davis 2006, §3.2).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void SubtractScaled(T[] x, ReadOnlySpan<int> rows, ReadOnlySpan<T> values, T factor)
+    {
+        values = values[..rows.Length];
+        for (int t = 0; t < rows.Length; t++) x[rows[t]] -= values[t] * factor;
     }
 
     private static void Grow(ref int[] index, ref T[] values, int needed)

@@ -40,7 +40,8 @@ public sealed partial class SparseLu<T>
                 xl[j] = T.Zero;
                 uxl[p] = ujk;
                 if (T.IsZero(ujk)) continue;
-                for (int pl = lpl[j]; pl < lpl[j + 1]; pl++) xl[lil[pl]] -= lxl[pl] * ujk;
+                int start = lpl[j], length = lpl[j + 1] - start;
+                SubtractScaled(xl, lil.AsSpan(start, length), lxl.AsSpan(start, length), ujk);
             }
 
             T pivot = xl[k];

@@ -27,6 +27,8 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
     private T[] ux;
     private readonly int[] lpend;      // end of the pruned part of each L column, -1 if unpruned
     private readonly int[] pinv;       // row i of A is pivot row pinv[i]
+    private readonly int[] qinv;       // column j of A is column qinv[j] of the factors
+    private readonly int[] rowPivot;   // pinv during factorisation, on rows numbered by qinv
     private readonly T[] x;            // dense column accumulator, all zero between columns
     private readonly int[] xi;         // reach output and DFS recursion stack
     private readonly int[] pstack;     // DFS resume positions
@@ -51,6 +53,9 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         ui = new int[Capacity(symbolic.EstimatedNonZerosU)];
         ux = new T[ui.Length];
         pinv = new int[n];
+        qinv = new int[n];
+        for (int k = 0; k < n; k++) qinv[symbolic.ColumnOrder[k]] = k;
+        rowPivot = new int[n];
         lpend = new int[n];
         x = new T[n];
         xi = new int[n];
