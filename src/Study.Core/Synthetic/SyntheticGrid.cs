@@ -30,6 +30,7 @@ public sealed record SyntheticGridOptions
 /// realistic spread, and smooth voltage magnitudes — and the injections are computed from it, so
 /// the exact solution is known. Above 10,000 buses lines are shortened electrically so the grid
 /// keeps the electrical size of a real one.
+/// Voltage magnitudes stay within ±1.5 % of 1 pu so that a flat start is a fair first guess.
 /// </summary>
 public static class SyntheticGrid
 {
@@ -44,14 +45,22 @@ public static class SyntheticGrid
         List<(int From, int To, double Length)> edges = Topology(n, x, y, options.BranchesPerBus);
 
         // Per-unit reactance per lattice length: about 0.02 pu for a neighbour link at 10k buses or
-        // fewer, shortened by sqrt(10k/n) above that so the electrical diameter stays realistic.
-        double xPerLength = 0.02 * Math.Min(1.0, Math.Sqrt(10_000.0 / n));
+        // fewer, shortened by (10k/n)^¼ above that so the electrical diameter grows more slowly than
+        // the hop count (a full sqrt(10k/n) makes links so stiff that flat start no longer converges).
+        double xPerLength = 0.02 * Math.Min(1.0, Math.Pow(10_000.0 / n, 0.25));
         var branches = new List<SyntheticBranch>(edges.Count);
         foreach (var (from, to, length) in edges)
         {
             double xPu = Math.Max(1e-4, xPerLength * length * (0.8 + 0.4 * random.NextDouble()));
             bool transformer = random.NextDouble() < options.TransformerShare;
-            double ratio = transformer ? 0.95 + 0.1 * random.NextDouble() : 1.0;
+            double ratio = 1.0;
+            if (transformer)
+            {
+                // A transformer keeps its own leakage reactance whatever the grid's size, so the
+                // circulating reactive power of an off-nominal ratio inside a mesh (Δt / x) stays modest.
+                xPu = 0.04 + 0.04 * random.NextDouble();
+                ratio = Math.Round(0.97 + 0.06 * random.NextDouble(), 4);
+            }
             branches.Add(new SyntheticBranch(from, to, xPu / 8, xPu, transformer ? 0 : xPu * 0.02 * 10, ratio, transformer));
         }
 
@@ -66,7 +75,7 @@ public static class SyntheticGrid
         double phase = random.NextDouble() * 2 * Math.PI;
         double side = Math.Ceiling(Math.Sqrt(n));
         for (int i = 0; i < n; i++)
-            vm[i] = Math.Round(1.01 + 0.03 * Math.Sin(2 * Math.PI * x[i] / side + phase) * Math.Cos(Math.PI * y[i] / side), 4);
+            vm[i] = Math.Round(1.0 + 0.015 * Math.Sin(2 * Math.PI * x[i] / side + phase) * Math.Cos(Math.PI * y[i] / side), 4);
         Complex[] injection = Injections(n, branches, vm, angle);
         Network network = ToNetwork(options, branches, isGenerator, vm, angle, injection);
         return new SyntheticCase(network, vm, angle.Select(a => a * 180 / Math.PI).ToArray());
