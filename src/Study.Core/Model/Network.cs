@@ -79,10 +79,11 @@ public sealed record Network
 
     /// <summary>True when no bus states its base kV: a per-unit-only case (several archive cases).</summary>
     [JsonIgnore]
-    public bool IsPerUnitOnly => Buses.Count > 0 && Buses.All(b => b.Kv == 0);
+    /// <remarks>Null entries (which the validator reports) are skipped, so this never throws on a parsed file.</remarks>
+    public bool IsPerUnitOnly => Buses.Any(b => b is not null) && Buses.All(b => b is null || b.Kv == 0);
 
-    public Bus? FindBus(string id) => Buses.FirstOrDefault(b => b.Id == id);
+    public Bus? FindBus(string id) => Buses.FirstOrDefault(b => b?.Id == id);
 
     public Scenario? FindScenario(string name) =>
-        Scenarios.FirstOrDefault(s => string.Equals(s.Name, name, StringComparison.OrdinalIgnoreCase));
+        Scenarios.FirstOrDefault(s => s is not null && string.Equals(s.Name, name, StringComparison.OrdinalIgnoreCase));
 }
