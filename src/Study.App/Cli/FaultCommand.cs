@@ -12,7 +12,7 @@ public sealed class FaultCommand : Command
     public override string Name => "fault";
     public override string Summary => "fault levels (I''k, S''k, i_p) at buses and breaker duty, by IEC 60909 or from a solved load flow";
     public override string Usage =>
-        "study fault FILE [--bus ID ... | --all] [--type 3ph,slg,ll,dlg] [--zf R,X] [--method iec60909|loadflow] [--min] [--scenario NAME] [--json] [--markdown FILE]";
+        "study fault FILE [--bus ID ... | --all] [--type 3ph,slg,ll,dlg] [--zf R,X] [--method iec60909|loadflow] [--min] [--scenario NAME] [--json] [--markdown FILE] [--timings]";
     public override IReadOnlyList<string> OptionHelp =>
     [
         "--bus ID ...            fault these buses only (default: every bus)",
@@ -24,9 +24,10 @@ public sealed class FaultCommand : Command
         "--scenario NAME         scale loads as the named scenario does (matters for --method loadflow)",
         "--json                  machine-readable result",
         "--markdown FILE         write the report as Markdown, with the inputs and the caution, to attach to a study note",
+        "--timings               report the time of each stage (read, validate, build, faults, report)",
     ];
     protected override IEnumerable<string> ValueOptions => ["bus*", "type*", "zf", "method", "scenario", "markdown"];
-    protected override IEnumerable<string> Flags => ["json", "all", "min"];
+    protected override IEnumerable<string> Flags => ["json", "all", "min", "timings"];
 
     protected override int Execute(Arguments args, CommandContext context)
     {
@@ -56,9 +57,11 @@ public sealed class FaultCommand : Command
         var zf = args.Pair("zf") is (double r, double x) ? new Complex(r, x) : Complex.Zero;
         if (zf.Real < 0) throw new UsageException("--zf resistance must not be negative");
 
-        Network network = NetworkLoading.ReadValid(path, context.Err);
+        StageClock? clock = args.Has("timings") ? new StageClock() : null;
+        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
         Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
         PerUnitModel model = PerUnitModel.Build(network, scenario);
+        clock?.Lap("build");
         LoadFlowResult? preFault = null;
         if (method == FaultMethod.LoadFlow)
         {
@@ -68,6 +71,7 @@ public sealed class FaultCommand : Command
                 context.Err.WriteLine($"error: {path}: the pre-fault load flow did not converge: {preFault.Message}");
                 return ExitCode.NoConvergence;
             }
+            clock?.Lap("pre-fault load flow");
         }
         var request = new FaultRequest
         {
@@ -79,10 +83,12 @@ public sealed class FaultCommand : Command
             PreFault = preFault,
         };
         FaultResult result = FaultStudy.Run(model, request);
+        clock?.Lap("faults");
         string text = FaultReport.Render(path, network, result, detail: buses.Count > 0);
         if (args.Value("markdown") is string markdown)
             Reports.ReportFiles.WriteMarkdown(markdown, Reports.FaultMarkdown.Build(path, network, result, request, scenario?.Name, text));
-        context.Out.Write(args.Has("json") ? CliJson.Serialize(FaultJson.From(result)) : text);
+        clock?.Lap("report");
+        context.Out.Write(args.Has("json") ? CliJson.Serialize(FaultJson.From(result) with { Timings = clock?.ToJson() }) : text + clock?.Render());
         return ExitCode.Done;
     }
 }

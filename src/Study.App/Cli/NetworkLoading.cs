@@ -8,10 +8,13 @@ namespace Study.App.Cli;
 public static class NetworkLoading
 {
     /// <summary>Reads and validates; errors become one InputException listing every problem.</summary>
-    public static Network ReadValid(string path, TextWriter err)
+    /// <param name="clock">When given, the reading and the validation are timed as stages "read" and "validate".</param>
+    public static Network ReadValid(string path, TextWriter err, StageClock? clock = null)
     {
         Network network = NetworkFile.Read(path);
+        clock?.Lap("read");
         ValidationReport report = NetworkValidator.Validate(network);
+        clock?.Lap("validate");
         if (report.HasErrors)
         {
             var errors = report.Problems.Where(p => p.Severity == Severity.Error).ToList();

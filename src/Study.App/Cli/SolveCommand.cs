@@ -12,7 +12,7 @@ public sealed class SolveCommand : Command
     public override string Name => "solve";
     public override string Summary => "solve the load flow (Newton-Raphson) and report voltages, flows, losses and violations";
     public override string Usage =>
-        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--markdown FILE] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE]";
+        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--markdown FILE] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE] [--timings]";
     public override IReadOnlyList<string> OptionHelp =>
     [
         "--scenario NAME         scale loads as the named scenario does (default: loads as entered)",
@@ -24,9 +24,10 @@ public sealed class SolveCommand : Command
         "--no-q-limits           do not switch PV buses to PQ at their reactive limits",
         "--fixed-taps            hold on-load tap changers at the positions in the file",
         "--export-jacobian FILE  write the Jacobian of the last iteration (Matrix Market)",
+        "--timings               report the time of each stage (read, validate, build, solve, report)",
     ];
     protected override IEnumerable<string> ValueOptions => ["scenario", "csv", "markdown", "tolerance", "max-iterations", "export-jacobian"];
-    protected override IEnumerable<string> Flags => ["json", "no-q-limits", "fixed-taps"];
+    protected override IEnumerable<string> Flags => ["json", "no-q-limits", "fixed-taps", "timings"];
 
     protected override int Execute(Arguments args, CommandContext context)
     {
@@ -43,10 +44,21 @@ public sealed class SolveCommand : Command
         if (!(options.TolerancePu > 0)) throw new UsageException("--tolerance must be positive");
         if (options.MaxIterations < 1) throw new UsageException("--max-iterations must be at least 1");
 
-        Network network = NetworkLoading.ReadValid(path, context.Err);
+        StageClock? clock = args.Has("timings") ? new StageClock() : null;
+        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
         Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
         PerUnitModel model = PerUnitModel.Build(network, scenario);
+        clock?.Lap("build");
         LoadFlowResult result = LoadFlowSolver.Solve(model, options);
+        clock?.Lap("solve");
+        if (clock is not null && result.Timings is LoadFlowTimings t)
+        {
+            clock.Detail("solve.admittance", t.AdmittanceMs);
+            clock.Detail("solve.analyse", t.AnalyseMs);
+            clock.Detail("solve.jacobian", t.JacobianMs);
+            clock.Detail("solve.factor", t.FactorMs);
+            clock.Detail("solve.substitution", t.SolveMs);
+        }
         var comparison = PublishedComparison.Compare(network, result);
 
         if (args.Value("export-jacobian") is string jacobianPath && result.Jacobian is not null)
@@ -58,7 +70,11 @@ public sealed class SolveCommand : Command
         var report = LoadFlowReport.Build(path, network, result, comparison, options);
         if (args.Value("markdown") is string markdown)
             ReportFiles.WriteMarkdown(markdown, report);
-        context.Out.Write(args.Has("json") ? CliJson.Serialize(SolveJson.From(result, comparison)) : PlainTextReport.Render(report));
+        clock?.Lap("report");
+        if (args.Has("json"))
+            context.Out.Write(CliJson.Serialize(SolveJson.From(result, comparison) with { Timings = clock?.ToJson() }));
+        else
+            context.Out.Write(PlainTextReport.Render(report) + clock?.Render());
         if (!result.Converged)
         {
             context.Err.WriteLine($"error: {path}: the load flow did not converge: {result.Message}");

@@ -7,8 +7,9 @@ using Study.Core.Units;
 namespace Study.Core.Faults;
 
 /// <summary>
-/// For a faulted bus k: columns k of Z1, Z2, Z0 and Z_c by one solve each; the Thevenin impedances
-/// are their diagonal entries; the sequence currents follow from <see cref="SymmetricalComponents"/>;
+/// For a faulted bus k: the entries of columns k of Z1, Z2, Z0 and Z_c that the results read (the
+/// diagonal, and the neighbours when voltages or contributions are asked for), each from two sparse
+/// triangular solves rather than a full column; the Thevenin impedances are the diagonal entries; the sequence currents follow from <see cref="SymmetricalComponents"/>;
 /// by superposition the fault changes bus voltages by ΔV_s = −Z_s[:, k]·I_s, and branch currents by the
 /// branch two-ports applied to ΔV. Column buffers are allocated once for the whole scan.
 /// </summary>
@@ -22,6 +23,8 @@ internal sealed class FaultScan
     private readonly Complex[] z1, z2, z0, zc;
     private readonly int[][] adjacent;
     private readonly (int Bus, int Lag)[][] neighbours;
+    private readonly int[][] rowsRead;     // per bus: the Z entries its results read, the bus first
+    private readonly bool unbalanced;     // a kind other than 3ph: negative and zero sequence carry current
 
     /// <param name="preFault">Solved pre-fault voltages (load-flow method); null: the equivalent source c at every bus.</param>
     public FaultScan(PerUnitModel model, SequenceNetworks networks, FaultRequest request, Complex[]? preFault)
@@ -45,6 +48,29 @@ internal sealed class FaultScan
         adjacent = lists.Select(l => l.ToArray()).ToArray();
         neighbours = new (int, int)[n][];
         for (int i = 0; i < n; i++) neighbours[i] = NeighboursOf(i);
+        unbalanced = request.Kinds.Any(k => k != FaultKind.ThreePhase);
+        rowsRead = new int[n][];
+        for (int i = 0; i < n; i++) rowsRead[i] = RowsRead(i);
+    }
+
+    // The bus, its neighbours (voltages) and the ends of its branches (contributions), once each.
+    private int[] RowsRead(int bus)
+    {
+        var rows = new List<int> { bus };
+        void Add(int r)
+        {
+            if (!rows.Contains(r)) rows.Add(r);
+        }
+        if (request.IncludeVoltages) foreach (var (other, _) in neighbours[bus]) Add(other);
+        if (request.IncludeContributions)
+        {
+            foreach (int b in adjacent[bus])
+            {
+                Add(model.Branches[b].From);
+                Add(model.Branches[b].To);
+            }
+        }
+        return rows.ToArray();
     }
 
     public void At(int bus, List<ShortCircuitLevel> into)
@@ -53,11 +79,13 @@ internal sealed class FaultScan
         double kv = pu.BaseKv, baseMva = model.BaseMva;
         double? baseKa = kv > 0 ? baseMva / (Sqrt3 * kv) : null;
         double zBaseOhm = kv * kv / baseMva;
-        networks.Positive.Column(bus, z1);
-        networks.Negative.Column(bus, z2);
-        networks.EquivalentFrequency.Column(bus, zc);
+        // A three-phase fault drives no negative or zero sequence current: those networks need only Z(k, k).
+        ReadOnlySpan<int> rows = rowsRead[bus], diagonal = rows[..1];
+        networks.Positive.Entries(bus, rows, z1);
+        networks.Negative.Entries(bus, unbalanced ? rows : diagonal, z2);
+        networks.EquivalentFrequency.Entries(bus, diagonal, zc);
         SequenceNetwork? zero = networks.Zero;
-        zero?.Column(bus, z0);
+        zero?.Entries(bus, unbalanced ? rows : diagonal, z0);
         Complex? zk1 = networks.Positive.IsFed(bus) ? z1[bus] : null;
         Complex? zk2 = networks.Negative.IsFed(bus) ? z2[bus] : null;
         Complex? zk0 = zero is not null && zero.IsFed(bus) ? z0[bus] : null;

@@ -26,6 +26,7 @@ public sealed class SequenceNetwork
     private readonly SparseLu<Complex> lu;
     private readonly bool[] fed;
     private readonly BranchAdmittance[] twoPorts;
+    private Complex[] scratch = new Complex[16];
 
     /// <param name="model">The model whose buses are used; its branches are replaced by <paramref name="branches"/>.</param>
     /// <param name="branches">Every branch of the model for this sequence, aligned with model.Branches; null where it carries nothing in series.</param>
@@ -76,6 +77,18 @@ public sealed class SequenceNetwork
     /// end (zero sequence), so that I_from = Yff·V_from + Yft·V_to gives its current at the From end.
     /// </summary>
     public BranchAdmittance TwoPort(int branch) => twoPorts[branch];
+
+    /// <summary>
+    /// Entries rows[t] of column k of Z_s into column[rows[t]], other entries untouched: two sparse
+    /// triangular solves per row instead of a full solve (<see cref="SparseLu{T}.InverseEntries"/>).
+    /// </summary>
+    public void Entries(int bus, ReadOnlySpan<int> rows, Span<Complex> column)
+    {
+        if (scratch.Length < rows.Length) scratch = new Complex[Math.Max(rows.Length, 2 * scratch.Length)];
+        Span<Complex> values = scratch.AsSpan(0, rows.Length);
+        lu.InverseEntries(bus, rows, values);
+        for (int t = 0; t < rows.Length; t++) column[rows[t]] = values[t];
+    }
 
     /// <summary>Column k of Z_s into <paramref name="column"/> (n entries): Y_s·z = e_k.</summary>
     public void Column(int bus, Span<Complex> column)

@@ -114,12 +114,20 @@ public static partial class NetworkFile
         var reader = new Utf8JsonReader(utf8, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip });
         string? array = null;
         int objectStartLine = 0;
+        // Lines are counted forward from the previous object, so the whole scan reads the file once.
+        long counted = 0;
+        int line = 1;
         while (reader.Read())
         {
             if (reader.CurrentDepth == 1 && reader.TokenType == JsonTokenType.PropertyName)
                 array = reader.GetString();
             else if (reader.CurrentDepth == 2 && reader.TokenType == JsonTokenType.StartObject)
-                objectStartLine = LineAt(utf8, reader.TokenStartIndex);
+            {
+                long offset = reader.TokenStartIndex;
+                line += utf8.AsSpan((int)counted, (int)(offset - counted)).Count((byte)'\n');
+                counted = offset;
+                objectStartLine = line;
+            }
             else if (reader.CurrentDepth == 3 && reader.TokenType == JsonTokenType.PropertyName
                      && (reader.ValueTextEquals("id") || reader.ValueTextEquals("name"))
                      && FamilyOfArray(array) is ElementFamily family)

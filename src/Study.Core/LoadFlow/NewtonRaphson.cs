@@ -103,6 +103,8 @@ internal sealed class NewtonRaphson
             diagQTheta[k] = dQdTheta[p];
             diagQV[k] = dQdV[p];
         }
+        // Minimum degree on the 2m-node pattern: on the generated grids it fills less than minimum
+        // degree on the bus graph expanded to 2×2 blocks (BlockOrdering; bench/RESULTS.md).
         lu = SparseLu<double>.Analyse(jacobian);
     }
 

@@ -9,4 +9,7 @@ public enum ColumnOrdering
 
     /// <summary>Approximate minimum degree on A + Aᵀ (Davis 2006, §7.1).</summary>
     Amd,
+
+    /// <summary>An order given by the caller, such as <see cref="BlockOrdering"/>'s.</summary>
+    Given,
 }

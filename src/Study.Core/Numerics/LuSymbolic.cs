@@ -37,6 +37,7 @@ public sealed class LuSymbolic
     {
         ArgumentNullException.ThrowIfNull(a);
         if (a.Rows != a.Cols) throw new ArgumentException($"LU needs a square matrix, not {a.Rows}×{a.Cols}.", nameof(a));
+        if (ordering == ColumnOrdering.Given) throw new ArgumentException("a given order comes with its permutation: use the overload that takes it.", nameof(ordering));
         int n = a.Cols;
         var pattern = SymmetricPattern.OfSum(n, a.ColPtr, a.RowIdx);
         int[] q;
@@ -49,6 +50,29 @@ public sealed class LuSymbolic
             q = new int[n];
             for (int k = 0; k < n; k++) q[k] = k;
         }
+        return Counted(pattern, ordering, q);
+    }
+
+    /// <summary>Analysis with a column order chosen by the caller (a permutation of 0..n-1).</summary>
+    public static LuSymbolic Analyse<T>(CscMatrix<T> a, int[] columnOrder) where T : INumberBase<T>
+    {
+        ArgumentNullException.ThrowIfNull(a);
+        ArgumentNullException.ThrowIfNull(columnOrder);
+        if (a.Rows != a.Cols) throw new ArgumentException($"LU needs a square matrix, not {a.Rows}×{a.Cols}.", nameof(a));
+        int n = a.Cols;
+        if (columnOrder.Length != n) throw new ArgumentException($"the order has {columnOrder.Length} entries for {n} columns.", nameof(columnOrder));
+        var seen = new bool[n];
+        foreach (int j in columnOrder)
+        {
+            if ((uint)j >= (uint)n || seen[j]) throw new ArgumentException("the column order is not a permutation.", nameof(columnOrder));
+            seen[j] = true;
+        }
+        return Counted(SymmetricPattern.OfSum(n, a.ColPtr, a.RowIdx), ColumnOrdering.Given, (int[])columnOrder.Clone());
+    }
+
+    private static LuSymbolic Counted(SymmetricPattern pattern, ColumnOrdering ordering, int[] q)
+    {
+        int n = pattern.N;
 
         // Fill of the symmetric pattern in the chosen order: Cholesky column counts of Q(A+Aᵀ)Qᵀ give
         // L's columns and, by symmetry, U's rows, under diagonal pivoting (Davis 2006, §4.5).

@@ -125,7 +125,9 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         CheckMatrix(a);
         if (factorised && SamePatternAsFactored(a))
         {
-            if (RefactorValues(a))
+            bool refactored = RefactorValues(a);
+            factorCount++;
+            if (refactored)
             {
                 ValueRefactorisations++;
                 singularColumn = -1;
@@ -203,6 +205,7 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
     private bool FactorFresh(CscMatrix<T> a, out int singularColumn)
     {
         factorised = FactorWithPivoting(a, out singularColumn);
+        factorCount++;
         if (factorised) PivotingFactorisations++;
         return factorised;
     }

@@ -21,4 +21,8 @@ internal static class DenseReference
 
     public static Complex[] SolveTransposed(Complex[,] a, Complex[] b) =>
         Matrix<Complex>.Build.DenseOfArray(a).Transpose().LU().Solve(ComplexVector.Build.DenseOfArray(b)).ToArray();
+
+    public static double[,] Inverse(double[,] a) => Matrix<double>.Build.DenseOfArray(a).Inverse().ToArray();
+
+    public static Complex[,] Inverse(Complex[,] a) => Matrix<Complex>.Build.DenseOfArray(a).Inverse().ToArray();
 }

@@ -14,6 +14,10 @@ public sealed record FaultBreakerJson(string Id, string Bus, double? DutyPercent
 
 public sealed record FaultJson(string Method, string Caution, IReadOnlyList<FaultLevelJson> Faults, IReadOnlyList<FaultBreakerJson> Breakers)
 {
+    /// <summary>Only with --timings: the time of each stage of the command.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public TimingsJson? Timings { get; init; }
+
     public static FaultJson From(FaultResult r) => new(
         r.Method.Code(),
         r.Caution,

@@ -32,6 +32,10 @@ public sealed record SolveJson(bool Converged, int Iterations, double MaxMismatc
     [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
     public PublishedJson? Published { get; init; }
 
+    /// <summary>Only with --timings: the time of each stage of the command.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public TimingsJson? Timings { get; init; }
+
     public static string? ViolationName(ViolationKind kind) => kind switch
     {
         ViolationKind.Low => "low",
