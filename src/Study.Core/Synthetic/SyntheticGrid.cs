@@ -49,10 +49,16 @@ public static class SyntheticGrid
         // the hop count (a full sqrt(10k/n) makes links so stiff that flat start no longer converges).
         double xPerLength = 0.02 * Math.Min(1.0, Math.Pow(10_000.0 / n, 0.25));
         var branches = new List<SyntheticBranch>(edges.Count);
-        foreach (var (from, to, length) in edges)
+        // Transformers go on loop links only (the first n − 1 links are the spanning tree): a pocket
+        // of load hanging from a single transformer can have a second, low-voltage solution, and flat
+        // start may find that one instead of the manufactured one.
+        int treeLinks = n - 1;
+        double transformerChance = options.TransformerShare * edges.Count / Math.Max(1, edges.Count - treeLinks);
+        for (int k = 0; k < edges.Count; k++)
         {
+            var (from, to, length) = edges[k];
             double xPu = Math.Max(1e-4, xPerLength * length * (0.8 + 0.4 * random.NextDouble()));
-            bool transformer = random.NextDouble() < options.TransformerShare;
+            bool transformer = k >= treeLinks && random.NextDouble() < transformerChance;
             double ratio = 1.0;
             if (transformer)
             {
