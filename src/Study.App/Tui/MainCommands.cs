@@ -58,6 +58,7 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.Fault: Studies.Fault(); break;
             case TuiAction.TapStudy: Studies.TapStudy(); break;
             case TuiAction.ApplyTap: Studies.ApplyRecommendedTap(); break;
+            case TuiAction.Outages: Studies.Outages(); break;
             case TuiAction.Scenario: ChooseScenario(); break;
             case TuiAction.Cancel: main.Runner.Cancel(); break;
             case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
@@ -65,6 +66,7 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.ShowBranches: main.Results.Value = main.Results.BranchesTab; break;
             case TuiAction.ShowFaults: main.Results.Value = main.Results.FaultsTab; break;
             case TuiAction.ShowTapStudy: main.Results.Value = main.Results.TapStudyTab; break;
+            case TuiAction.ShowOutages: main.Results.Value = main.Results.OutagesTab; break;
             case TuiAction.ShowOneLine: main.Results.Value = main.Results.OneLineTab; break;
             case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
             case TuiAction.ShowVoltageChart: main.Results.Value = main.Results.ChartTab; break;

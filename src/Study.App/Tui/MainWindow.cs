@@ -97,6 +97,7 @@ public sealed class MainWindow : Window
         ShowResult(null);
         Results.FaultResult = null;
         Results.TapStudyResult = null;
+        Results.OutageResult = null;
         Refresh();
     }
 

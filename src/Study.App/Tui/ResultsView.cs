@@ -9,7 +9,7 @@ using Attr = Terminal.Gui.Drawing.Attribute;
 
 namespace Study.App.Tui;
 
-/// <summary>Tabs: Detail, Buses, Branches, Faults, Tap study, One-line, Voltage chart.</summary>
+/// <summary>Tabs: Detail, Buses, Branches, Faults, Tap study, One-line, Voltage chart, Outages.</summary>
 public sealed class ResultsView : Tabs
 {
     /// <summary>The caution every fault screen carries; the engine owns the wording.</summary>
@@ -22,6 +22,7 @@ public sealed class ResultsView : Tabs
     private readonly FaultView faults = new();
     private readonly TapStudyView tapStudy = new();
     private readonly OneLineView oneLine = new();
+    private readonly OutageView outages = new();
     private LoadFlowResult? result;
 
     public ResultsView()
@@ -35,6 +36,7 @@ public sealed class ResultsView : Tabs
         TapStudyTab = Tab("Tap study", tapStudy);
         OneLineTab = Tab("One-line", oneLine);
         ChartTab = Tab("Voltage chart", chart);
+        OutagesTab = Tab("Outages", outages);
         buses.Style.RowColorGetter = args => BusRowScheme(args.RowIndex);
     }
 
@@ -45,6 +47,7 @@ public sealed class ResultsView : Tabs
     public View TapStudyTab { get; }
     public View OneLineTab { get; }
     public View ChartTab { get; }
+    public View OutagesTab { get; }
 
     public LoadFlowResult? Result
     {
@@ -70,6 +73,12 @@ public sealed class ResultsView : Tabs
     {
         get => tapStudy.Result;
         set => tapStudy.Result = value;
+    }
+
+    public OutageScreeningResult? OutageResult
+    {
+        get => outages.Result;
+        set => outages.Result = value;
     }
 
     public IReadOnlyList<OneLineRow> OneLine

@@ -1,4 +1,4 @@
-// The study commands of the main screen: fault study, tap study, and applying a recommended tap.
+// The study commands of the main screen: fault study, tap study, applying a recommended tap, outage screening.
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
@@ -44,6 +44,24 @@ public sealed class StudyCommands(MainWindow main)
                 main.ShowStudyTab(main.Results.TapStudyTab);
             },
             message => Prompts.Tell(App, "Tap study", message),
+            () => fraction);
+    }
+
+    /// <summary>Each line and transformer out in turn, in the active scenario or all of them, on a snapshot.</summary>
+    public void Outages()
+    {
+        var form = new OutageForm(Session.Network, Session.ActiveScenario);
+        if (!OutageDialog.Run(App, form) || form.Build().Request is not { } request) return;
+        Network snapshot = Session.Network;
+        double fraction = 0;
+        var progress = new Progress<double>(f => fraction = f);
+        main.Runner.Start("Outage screening", cancel => OutageScreening.Run(snapshot, request, LoadFlowOptions.Default, progress, cancel),
+            result =>
+            {
+                main.Results.OutageResult = result;
+                main.ShowStudyTab(main.Results.OutagesTab);
+            },
+            message => Prompts.Tell(App, "Outage screening", message),
             () => fraction);
     }
 

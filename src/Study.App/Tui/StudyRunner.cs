@@ -46,6 +46,8 @@ public sealed class StudyRunner(IApplication app)
             cancel = null;
             Progress = null;
             source.Dispose();
+            // The status line drops the spinner before a message about the outcome goes up (it may be modal).
+            StateChanged?.Invoke();
             if (task.IsCanceled || task.Exception?.InnerException is OperationCanceledException) failed($"{title} cancelled");
             else if (task.Exception?.InnerException is Exception e) failed($"{title} failed: {Describe(e)}");
             else done(task.Result);

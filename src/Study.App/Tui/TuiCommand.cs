@@ -8,8 +8,8 @@ public enum TuiAction
 {
     Open, Save, SaveAs, Quit,
     Add, Edit, Delete, Duplicate, Undo, Redo,
-    LoadFlow, Fault, TapStudy, ApplyTap, Scenario, Cancel,
-    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOneLine, ShowVoltageChart, EnlargeResults,
+    LoadFlow, Fault, TapStudy, ApplyTap, Outages, Scenario, Cancel,
+    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, EnlargeResults,
     Help,
 }
 
@@ -38,6 +38,7 @@ public static class TuiCommands
         new(TuiAction.Fault, "Study", "_Fault…", "Fault at a bus or at all buses", Key.F7),
         new(TuiAction.TapStudy, "Study", "_Tap study…", "Every tap position of a transformer in every scenario", Key.F8),
         new(TuiAction.ApplyTap, "Study", "_Apply recommended tap", "Set the studied transformer to the best position of the last tap study (undoable)", Key.P.WithAlt),
+        new(TuiAction.Outages, "Study", "_Outage screening…", "Each line and transformer out in turn, ranked by severity", Key.U.WithAlt),
         new(TuiAction.Scenario, "Study", "_Scenario…", "Choose the scenario studies run in", Key.N.WithAlt),
         new(TuiAction.Cancel, "Study", "_Cancel study", "Stop the study that is running", Key.Esc),
         new(TuiAction.ShowDetail, "View", "_Detail", "Selected element: fields, problems, per-unit values", Key.D1.WithAlt),
@@ -47,6 +48,7 @@ public static class TuiCommands
         new(TuiAction.ShowTapStudy, "View", "_Tap study", "Tap-study results", Key.D5.WithAlt),
         new(TuiAction.ShowOneLine, "View", "_One-line", "Text one-line view of the network", Key.D6.WithAlt),
         new(TuiAction.ShowVoltageChart, "View", "_Voltage chart", "Bar chart of bus voltages against the band", Key.D7.WithAlt),
+        new(TuiAction.ShowOutages, "View", "O_utages", "Outage-screening results", Key.D8.WithAlt),
         new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Give the results the whole right side, or give the table back", Key.R.WithAlt),
         new(TuiAction.Help, "Help", "_Keys", "This list of keys", Key.F1),
     ];

@@ -1,0 +1,47 @@
+// The outage-screening question as a dialog: the active scenario or all of them.
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace Study.App.Tui;
+
+/// <summary>Fills an <see cref="OutageForm"/>. Enter runs, Esc cancels.</summary>
+public static class OutageDialog
+{
+    /// <summary>True when the user asked to run (the form then builds a request).</summary>
+    public static bool Run(IApplication app, OutageForm form)
+    {
+        var dialog = new Dialog { Title = "Outage screening", Width = Dim.Percent(90), Height = 11 };
+        var what = new Label
+        {
+            X = 0, Y = 0, Width = Dim.Fill(),
+            Text = "Each in-service line and transformer out in turn; ranked by severity.",
+        };
+        var scenLabel = new Label { X = 0, Y = 2, Text = "Scenarios" };
+        var scenarios = new OptionSelector
+        {
+            X = 11, Y = 2, Width = Dim.Fill(),
+            Labels = [$"active only ({form.ActiveScenarioLabel})", form.ScenarioCount == 0 ? "all scenarios (none defined: as entered)" : $"all {form.ScenarioCount} scenarios"],
+            Value = form.AllScenarios ? 1 : 0,
+        };
+        var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running screening" };
+        dialog.Add(what, scenLabel, scenarios, status);
+        dialog.AddButton(new Button { Text = "Cancel" });
+        var run = new Button { Text = "Run" };
+        void Read() => form.AllScenarios = scenarios.Value == 1;
+        run.Accepting += (_, e) =>
+        {
+            Read();
+            if (form.Build().Error is not { } error) return;
+            e.Handled = true;
+            status.Text = error;
+        };
+        dialog.AddButton(run);
+        scenarios.SetFocus();
+        app.Run(dialog);
+        Read();
+        bool accepted = dialog.Result == 1 && form.Build().Error is null;
+        dialog.Dispose();
+        return accepted;
+    }
+}
