@@ -20,9 +20,9 @@ public sealed record GeneratorConversionResult(
 public static class GeneratorConversion
 {
     /// <param name="generationScale">Scenario scale on active power; not applied to a slack generator.</param>
-    public static GeneratorConversionResult Convert(Generator g, Bus bus, double baseMva, double generationScale = 1.0)
+    public static GeneratorConversionResult Convert(Generator g, Bus bus, double baseMva, double generationScale = 1.0, bool recordSteps = true)
     {
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double scale = g.Mode == GeneratorMode.Slack ? 1.0 : generationScale;
         double p = scale == 1.0
             ? d.Step("P", $"pMw / S_base = {N(g.PMw)} / {N(baseMva)}", g.PMw / baseMva, "pu")

@@ -27,10 +27,11 @@ public sealed record LineImpedanceResult(
 /// </summary>
 public static class LineImpedance
 {
-    public static LineImpedanceResult Convert(Line line, Bus fromBus, double baseMva)
+    /// <param name="recordSteps">False when only the numbers are needed (the model build): no derivation steps are kept or formatted.</param>
+    public static LineImpedanceResult Convert(Line line, Bus fromBus, double baseMva, bool recordSteps = true)
     {
         LineDataForm form = FormOf(line);
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double lengthKm = 1.0;
         double zBaseOhm = 1.0;
         if (form != LineDataForm.PerUnit)

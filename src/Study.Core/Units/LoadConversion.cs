@@ -10,9 +10,9 @@ public sealed record LoadConversionResult(double P, double Q, ZipMix Zip, IReadO
 /// <summary>P = pMw · loadScale / S_base, Q = qMvar · loadScale / S_base.</summary>
 public static class LoadConversion
 {
-    public static LoadConversionResult Convert(Load load, double loadScale, double baseMva)
+    public static LoadConversionResult Convert(Load load, double loadScale, double baseMva, bool recordSteps = true)
     {
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         d.Step("load scale", "scenario loadScale", loadScale, "");
         double p = d.Step("P", $"pMw · scale / S_base = {N(load.PMw)} · {N(loadScale)} / {N(baseMva)}", load.PMw * loadScale / baseMva, "pu");
         double q = d.Step("Q", $"qMvar · scale / S_base = {N(load.QMvar)} · {N(loadScale)} / {N(baseMva)}", load.QMvar * loadScale / baseMva, "pu");

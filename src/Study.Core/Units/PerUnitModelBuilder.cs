@@ -49,7 +49,7 @@ public sealed partial record PerUnitModel
         foreach (var line in network.Lines)
         {
             if (!line.InService || !Live(line.From, line.Id, out var from) || !Live(line.To, line.Id, out _)) continue;
-            var c = LineImpedance.Convert(line, from, baseMva);
+            var c = LineImpedance.Convert(line, from, baseMva, recordSteps: false);
             branches.Add(new PuBranch
             {
                 Id = line.Id, Kind = BranchKind.Line, From = index[line.From], To = index[line.To],
@@ -60,7 +60,7 @@ public sealed partial record PerUnitModel
         foreach (var t in network.Transformers)
         {
             if (!t.InService || !Live(t.Hv, t.Id, out var hv) || !Live(t.Lv, t.Id, out var lv)) continue;
-            var c = TransformerImpedance.Convert(t, hv, lv, baseMva);
+            var c = TransformerImpedance.Convert(t, hv, lv, baseMva, recordSteps: false);
             int? tapIndex = null;
             if (t.Tap is { } tap)
             {
@@ -79,7 +79,7 @@ public sealed partial record PerUnitModel
         foreach (var t in network.ThreeWindingTransformers)
         {
             if (!t.InService || !Live(t.Hv, t.Id, out var hv) || !Live(t.Mv, t.Id, out var mv) || !Live(t.Lv, t.Id, out var lv)) continue;
-            var c = ThreeWindingStar.Convert(t, hv, mv, lv, baseMva);
+            var c = ThreeWindingStar.Convert(t, hv, mv, lv, baseMva, recordSteps: false);
             string starId = ThreeWindingStar.StarBusId(t.Id);
             if (index.ContainsKey(starId))
                 throw new InputException($"bus id {starId} is reserved for the star point of {t.Id}", elementId: t.Id);
@@ -131,7 +131,7 @@ public sealed partial record PerUnitModel
         foreach (var g in network.Generators)
         {
             if (!g.InService || !Live(g.Bus, g.Id, out var bus)) continue;
-            var c = GeneratorConversion.Convert(g, bus, baseMva, generationScale);
+            var c = GeneratorConversion.Convert(g, bus, baseMva, generationScale, recordSteps: false);
             sources.Add(new PuSource
             {
                 Id = g.Id, Kind = ElementKind.Generator, Bus = index[g.Bus], Mode = g.Mode,
@@ -144,14 +144,14 @@ public sealed partial record PerUnitModel
         foreach (var l in network.Loads)
         {
             if (!l.InService || !Live(l.Bus, l.Id, out _)) continue;
-            var c = LoadConversion.Convert(l, loadScale, baseMva);
+            var c = LoadConversion.Convert(l, loadScale, baseMva, recordSteps: false);
             loads.Add(new PuLoad { Id = l.Id, Bus = index[l.Bus], P = c.P, Q = c.Q, Zip = c.Zip });
         }
         var shunts = new List<PuShunt>();
         foreach (var s in network.Shunts)
         {
             if (!s.InService || !Live(s.Bus, s.Id, out _)) continue;
-            var c = ShuntConversion.Convert(s, baseMva);
+            var c = ShuntConversion.Convert(s, baseMva, recordSteps: false);
             shunts.Add(new PuShunt { Id = s.Id, Bus = index[s.Bus], G = c.G, B = c.B });
         }
 

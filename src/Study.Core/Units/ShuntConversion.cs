@@ -13,9 +13,9 @@ public sealed record ShuntConversionResult(double G, double B, IReadOnlyList<Der
 /// </summary>
 public static class ShuntConversion
 {
-    public static ShuntConversionResult Convert(Shunt shunt, double baseMva)
+    public static ShuntConversionResult Convert(Shunt shunt, double baseMva, bool recordSteps = true)
     {
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double g = d.Step("G", $"pMw / S_base = {N(shunt.PMw)} / {N(baseMva)}", shunt.PMw / baseMva, "pu");
         double b = d.Step("B", $"qMvar / S_base = {N(shunt.QMvar)} / {N(baseMva)} (> 0 capacitive)", shunt.QMvar / baseMva, "pu");
         return new ShuntConversionResult(g, b, d.ToList());

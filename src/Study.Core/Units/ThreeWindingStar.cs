@@ -38,7 +38,7 @@ public static class ThreeWindingStar
     /// only the MVA base changes, z_sys = z · S_base / zBaseMva. (Putting the impedance at the
     /// terminal instead would call for the factor (winding kV / bus kV)²; the two are the same circuit.)
     /// </summary>
-    public static ThreeWindingStarResult Convert(ThreeWindingTransformer t, Bus hvBus, Bus mvBus, Bus lvBus, double baseMva)
+    public static ThreeWindingStarResult Convert(ThreeWindingTransformer t, Bus hvBus, Bus mvBus, Bus lvBus, double baseMva, bool recordSteps = true)
     {
         const string hint = "a three-winding transformer needs kV (it has no per-unit form)";
         double hvBusKv = BaseQuantities.RequireKv(hvBus, t.Id, hint);
@@ -50,7 +50,7 @@ public static class ThreeWindingStar
         double zBaseMva = BaseQuantities.RequirePositive(t.ZBaseMva, "zBaseMva", t.Id);
         if (t.Xr < 0) throw new InputException($"xr must not be negative (got {N(t.Xr)})", elementId: t.Id);
 
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double zHm = d.Step("z_HM", $"zHmPercent / 100 = {N(t.ZHmPercent)} / 100 (on {N(zBaseMva)} MVA)", t.ZHmPercent / 100.0, "pu");
         double zHl = d.Step("z_HL", $"zHlPercent / 100 = {N(t.ZHlPercent)} / 100", t.ZHlPercent / 100.0, "pu");
         double zMl = d.Step("z_ML", $"zMlPercent / 100 = {N(t.ZMlPercent)} / 100", t.ZMlPercent / 100.0, "pu");

@@ -46,13 +46,13 @@ public static class TransformerImpedance
 {
     public const string Z0DefaultNote = "z0Percent not given: taken equal to zPercent (default, not data)";
 
-    public static TransformerImpedanceResult Convert(Transformer t, Bus hvBus, Bus lvBus, double baseMva)
+    public static TransformerImpedanceResult Convert(Transformer t, Bus hvBus, Bus lvBus, double baseMva, bool recordSteps = true)
     {
         if (t.Units < 1)
             throw new InputException($"units must be at least 1 (got {t.Units})", elementId: t.Id);
         if (t.Tap is { Side: TapSide.Mv })
             throw new InputException("tap side mv on a two-winding transformer: use hv or lv", elementId: t.Id);
-        return FormOf(t) == TransformerDataForm.Nameplate ? Nameplate(t, hvBus, lvBus, baseMva) : PerUnit(t, baseMva);
+        return FormOf(t) == TransformerDataForm.Nameplate ? Nameplate(t, hvBus, lvBus, baseMva, recordSteps) : PerUnit(t, baseMva, recordSteps);
     }
 
     public static TransformerDataForm FormOf(Transformer t)
@@ -66,7 +66,7 @@ public static class TransformerImpedance
         return nameplate ? TransformerDataForm.Nameplate : TransformerDataForm.PerUnit;
     }
 
-    private static TransformerImpedanceResult Nameplate(Transformer t, Bus hvBus, Bus lvBus, double baseMva)
+    private static TransformerImpedanceResult Nameplate(Transformer t, Bus hvBus, Bus lvBus, double baseMva, bool recordSteps)
     {
         const string hint = "give rPu/xPu";
         double hvBusKv = BaseQuantities.RequireKv(hvBus, t.Id, hint);
@@ -78,7 +78,7 @@ public static class TransformerImpedance
         double xr = BaseQuantities.Require(t.Xr, "xr", t.Id);
         if (xr < 0) throw new InputException($"xr must not be negative (got {N(xr)})", elementId: t.Id);
 
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double z = d.Step("z (own base)", $"zPercent / 100 = {N(zPercent)} / 100", zPercent / 100.0, "pu");
         double r = d.Step("r (own base)", $"z / √(1 + (X/R)²) = {N(z)} / √(1 + {N(xr)}²)", z / Math.Sqrt(1 + xr * xr), "pu");
         double x = d.Step("x (own base)", $"r · X/R = {N(r)} · {N(xr)}", r * xr, "pu");
@@ -122,7 +122,7 @@ public static class TransformerImpedance
     }
 
     /// <summary>Imported cases: r, x, b already on the system base for one unit; parallel units divide z and multiply b.</summary>
-    private static TransformerImpedanceResult PerUnit(Transformer t, double baseMva)
+    private static TransformerImpedanceResult PerUnit(Transformer t, double baseMva, bool recordSteps)
     {
         double rPu = BaseQuantities.Require(t.RPu, "rPu", t.Id);
         double xPu = BaseQuantities.Require(t.XPu, "xPu", t.Id);
@@ -131,7 +131,7 @@ public static class TransformerImpedance
         if (t.NoLoad is not null)
             throw new InputException("noLoad needs the nameplate form (mva, hvKv, lvKv, zPercent)", elementId: t.Id);
 
-        var d = new Derivation();
+        var d = new Derivation(recordSteps);
         double n = t.Units;
         double r = d.Step("r", $"rPu / units = {N(rPu)} / {t.Units}", rPu / n, "pu");
         double x = d.Step("x", $"xPu / units = {N(xPu)} / {t.Units}", xPu / n, "pu");

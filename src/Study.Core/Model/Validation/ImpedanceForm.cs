@@ -22,8 +22,17 @@ internal sealed record ImpedanceForm(string Name, IReadOnlyList<string> GivenKey
     /// <summary>Reports a mix of forms; returns the one form given, or null when none or several are.</summary>
     public static ImpedanceForm? Single(ElementScope at, string noneMessage, params ImpedanceForm[] forms)
     {
+        // Runs once per branch: the one-form case, by far the common one, is found without allocating.
+        ImpedanceForm? only = null;
+        int count = 0;
+        foreach (ImpedanceForm f in forms)
+        {
+            if (!f.IsGiven) continue;
+            only = f;
+            count++;
+        }
+        if (count == 1) return only;
         ImpedanceForm[] given = forms.Where(f => f.IsGiven).ToArray();
-        if (given.Length == 1) return given[0];
         if (given.Length == 0)
             at.Error(null, noneMessage);
         else
