@@ -35,6 +35,7 @@ internal sealed class NewtonRaphson
     private readonly SparseLu<double> lu;
     private readonly Complex[] current;
     private readonly double[] step;
+    private readonly double[] voltageRowScale;  // weight of each PV bus's ΔV = 0 row, 1 for PQ buses
     private bool factorised;
 
     public NewtonRaphson(AdmittanceMatrix y, BusSchedule schedule)
@@ -59,6 +60,7 @@ internal sealed class NewtonRaphson
         current = new Complex[n];
         Mismatch = new double[2 * m];
         step = new double[2 * m];
+        voltageRowScale = new double[m];
 
         CscMatrix<Complex> ybus = y.Matrix;
         int nnz = ybus.NonZeros;
@@ -168,7 +170,8 @@ internal sealed class NewtonRaphson
                 return InnerOutcome.Singular;
             }
             factorised = true;
-            for (int r = 0; r < step.Length; r++) step[r] = -Mismatch[r];
+            for (int r = 0; r < m; r++) step[r] = -Mismatch[r];
+            for (int k = 0; k < m; k++) step[m + k] = -Mismatch[m + k] * voltageRowScale[k];
             lu.Solve(step);
             SolveTicks += System.Diagnostics.Stopwatch.GetTimestamp() - t2;
             for (int k = 0; k < m; k++)
@@ -273,12 +276,18 @@ internal sealed class NewtonRaphson
             jx[diagPV[k]] += s.Real * invVm + slope.Real;
             if (type[i] == BusType.Pq)
             {
+                voltageRowScale[k] = 1.0;
                 jx[diagQTheta[k]] += s.Real;
                 jx[diagQV[k]] += s.Imaginary * invVm + slope.Imaginary;
             }
             else
             {
-                jx[diagQV[k]] = 1.0;
+                // ΔV = 0 weighted by |Y_kk|: the same step, but a diagonal as large as the rest of its
+                // column, so threshold pivoting keeps it and the factor keeps AMD's fill.
+                double scale = Complex.Abs(yx[y.DiagonalPositions[i]]);
+                scale = scale > 0 && double.IsFinite(scale) ? scale : 1.0;
+                voltageRowScale[k] = scale;
+                jx[diagQV[k]] = scale;
             }
         }
     }

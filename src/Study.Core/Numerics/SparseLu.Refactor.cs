@@ -9,16 +9,16 @@ namespace Study.Core.Numerics;
 public sealed partial class SparseLu<T>
 {
     // Returns false, with the accumulator cleared, as soon as a pivot falls below
-    // RefactorPivotTolerance of the largest candidate in its column, or every candidate looks like
+    // tol (RefactorPivotTolerance, or PivotTolerance for a first factorisation) of the largest candidate in its column, or every candidate looks like
     // rounding noise, so the caller can re-pivot (or report the column singular).
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private bool RefactorValues(CscMatrix<T> a)
+    private bool RefactorValues(CscMatrix<T> a, double tol)
     {
         int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder;
         T[] ax = a.Values;
         int[] lpl = lp, lil = li, upl = up, uil = ui, pinvl = pinv;
         T[] lxl = lx, uxl = ux, xl = x;
-        double tol = Options.RefactorPivotTolerance, singularTol = Options.SingularPivotTolerance;
+        double singularTol = Options.SingularPivotTolerance;
         for (int k = 0; k < n; k++)
         {
             // Scatter A(:,q[k]) in pivot-row numbering.

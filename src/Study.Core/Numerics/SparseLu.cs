@@ -125,7 +125,7 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         CheckMatrix(a);
         if (factorised && SamePatternAsFactored(a))
         {
-            bool refactored = RefactorValues(a);
+            bool refactored = RefactorValues(a, Options.RefactorPivotTolerance);
             factorCount++;
             if (refactored)
             {
@@ -204,7 +204,8 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
 
     private bool FactorFresh(CscMatrix<T> a, out int singularColumn)
     {
-        factorised = FactorWithPivoting(a, out singularColumn);
+        singularColumn = -1;
+        factorised = TryFactorOnDiagonal(a) || FactorWithPivoting(a, out singularColumn);
         factorCount++;
         if (factorised) PivotingFactorisations++;
         return factorised;
