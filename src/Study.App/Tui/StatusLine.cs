@@ -7,7 +7,7 @@ namespace Study.App.Tui;
 /// <summary>Formats the status line so that the summary always shows and hints fill what room is left.</summary>
 public static class StatusLine
 {
-    public const string Hints = "F1 Keys  F2 Save  F4 Edit  F5 Solve  Ins Add  Del Delete  F9 Menu  Alt+Q Quit";
+    public const string Hints = "F1 Keys  F2 Save  F4 Edit  F5 Solve  Ins Add  Del Delete  Alt+F Menu  Alt+Q Quit";
 
     public static string Summary(LoadFlowResult? result, string? scenario, string? running)
     {

@@ -66,6 +66,6 @@ public static class TuiCommands
         ("Arrows, PgUp, PgDn", "Move in a list or table"),
         ("Enter", "Edit the selected element; in a form, accept"),
         ("Esc", "In a form or dialog, cancel; on the main screen, stop a running study"),
-        ("F9", "Open the menu bar"),
+        ("Alt+F, Alt+E, Alt+S, Alt+V, Alt+H", "Open the File, Edit, Study, View or Help menu"),
     ];
 }
