@@ -5,5 +5,6 @@ using Study.App.Tui;
 if (args.Length == 0 || (args.Length == 1 && !StudyCommand.IsCommand(args[0]) && !args[0].StartsWith('-')))
     return StudyTui.Run(args.Length == 0 ? null : args[0]);
 
-var context = new CommandContext(Console.Out, Console.Error);
+using Stream stdout = Console.OpenStandardOutput();
+var context = new CommandContext(Console.Out, Console.Error) { OutStream = stdout };
 return StudyCommand.Run(args, context);

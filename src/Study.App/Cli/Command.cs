@@ -2,7 +2,14 @@
 namespace Study.App.Cli;
 
 /// <summary>Where a command writes: standard output for results, standard error for messages.</summary>
-public sealed record CommandContext(TextWriter Out, TextWriter Err);
+public sealed record CommandContext(TextWriter Out, TextWriter Err)
+{
+    /// <summary>
+    /// The byte stream beneath <see cref="Out"/>, when there is one (standard output): large results
+    /// are written to it directly, as UTF-8, instead of through one big string.
+    /// </summary>
+    public Stream? OutStream { get; init; }
+}
 
 /// <summary>A subcommand. The CLI layer only parses, calls the engine and renders the result record.</summary>
 public abstract class Command

@@ -67,13 +67,18 @@ public sealed class SolveCommand : Command
                 + "rows: dP then dQ (dV for PV buses) of the unknown buses; columns: angle then |V|");
         if (args.Value("csv") is string dir)
             LoadFlowCsv.Write(result, dir);
-        var report = LoadFlowReport.Build(path, network, result, comparison, options);
-        if (args.Value("markdown") is string markdown)
+        bool json = args.Has("json");
+        string? markdown = args.Value("markdown");
+        // The readable report is built only when something shows it: --json alone never does.
+        ReportDocument? report = !json || markdown is not null
+            ? LoadFlowReport.Build(path, network, result, comparison, options)
+            : null;
+        if (markdown is not null && report is not null)
             ReportFiles.WriteMarkdown(markdown, report);
         clock?.Lap("report");
-        if (args.Has("json"))
-            context.Out.Write(CliJson.Serialize(SolveJson.From(result, comparison) with { Timings = clock?.ToJson() }));
-        else
+        if (json)
+            CliJson.Write(context, SolveJson.From(result, comparison) with { Timings = clock?.ToJson() });
+        else if (report is not null)
             context.Out.Write(PlainTextReport.Render(report) + clock?.Render());
         if (!result.Converged)
         {

@@ -85,7 +85,8 @@ public static partial class NetworkFile
             throw new InputException(
                 $"file version {network.Version} is newer than this program reads ({Network.CurrentVersion})", fileName, line, column);
         }
-        return network with { Source = new SourceMap(fileName, ElementLines(utf8)) };
+        // The lines are only needed for messages: found on the first look-up, so a clean file skips the scan.
+        return network with { Source = new SourceMap(fileName, () => ElementLines(utf8)) };
     }
 
     /// <summary>Rewrites a serializer message into one that names the key, the line and the column.</summary>

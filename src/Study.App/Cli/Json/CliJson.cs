@@ -34,4 +34,19 @@ public static class CliJson
         var info = (JsonTypeInfo<T>)Options.GetTypeInfo(typeof(T));
         return JsonSerializer.Serialize(value, info) + "\n";
     }
+
+    /// <summary>Writes what <see cref="Serialize"/> returns to the command's output, straight to its byte stream when it has one.</summary>
+    public static void Write<T>(CommandContext context, T value)
+    {
+        if (context.OutStream is not Stream stream)
+        {
+            context.Out.Write(Serialize(value));
+            return;
+        }
+        var info = (JsonTypeInfo<T>)Options.GetTypeInfo(typeof(T));
+        context.Out.Flush();
+        JsonSerializer.Serialize(stream, value, info);
+        stream.Write("\n"u8);
+        stream.Flush();
+    }
 }
