@@ -6,10 +6,10 @@ namespace Study.App.Tui;
 /// <summary>Builds the text table of a kind from its field list (the same list the edit form uses).</summary>
 public static class ElementTable
 {
-    public static TextTable Build(Network network, ElementKind kind)
+    public static TextTableSource Build(Network network, ElementKind kind)
     {
         IReadOnlyList<ElementField> fields = ElementFields.For(kind);
         var rows = ElementLists.Of(kind).Items(network).Select(e => fields.Select(f => f.Read(e)).ToArray()).ToList();
-        return new TextTable(fields.Select(f => f.Header).ToArray(), rows);
+        return new TextTableSource(fields.Select(f => f.Header).ToArray(), rows);
     }
 }

@@ -30,7 +30,7 @@ public static class FaultTables
     }
 
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>
-    public static TextTable Levels(FaultResult r) => new(LevelHeaders, r.Faults.Select((f, i) => new[]
+    public static TextTableSource Levels(FaultResult r) => new(LevelHeaders, r.Faults.Select((f, i) => new[]
     {
         i > 0 && r.Faults[i - 1].Bus == f.Bus ? "" : f.Bus,
         f.Kind.Code(),
@@ -43,7 +43,7 @@ public static class FaultTables
         F(f.IkPu, "0.000"),
     }).ToList());
 
-    public static TextTable Breakers(FaultResult r) => new(BreakerHeaders, r.Breakers.Select(b => new[]
+    public static TextTableSource Breakers(FaultResult r) => new(BreakerHeaders, r.Breakers.Select(b => new[]
     {
         b.Id,
         b.DutyPercent is double d ? F(d, "0.0") + " " + Mark(b.Status) : "—",

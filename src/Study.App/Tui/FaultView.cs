@@ -43,8 +43,8 @@ public sealed class FaultView : View
             result = value;
             caution.Content = CautionText(value?.Caution ?? ResultsView.FaultCaution);
             heading.Content = value is null ? "No fault study yet (F7)." : FaultTables.Heading(value);
-            levels.Table = value is null ? TextTable.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
-            breakers.Table = value is null ? TextTable.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);
+            levels.Table = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
+            breakers.Table = value is null ? TextTableSource.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);
             levels.Update();
             breakers.Update();
             SetNeedsLayout();

@@ -168,7 +168,7 @@ public sealed class MainWindow : Window
     {
         int row = k == kind ? Table.Value?.SelectedCell.Y ?? 0 : 0;
         kind = k;
-        TextTable table = ElementTable.Build(Session.Network, k);
+        TextTableSource table = ElementTable.Build(Session.Network, k);
         Table.Table = table;
         tableFrame.Title = $"{ElementFields.Plural(k)} ({table.Rows})";
         if (table.Rows > 0) Table.SetSelection(0, Math.Clamp(row, 0, table.Rows - 1), false);

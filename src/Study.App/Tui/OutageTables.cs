@@ -56,13 +56,13 @@ public static class OutageTables
     }
 
     /// <summary>The outages of every scenario, most severe first; the scenario is named on the first row of its group only.</summary>
-    public static TextTable Outages(OutageScreeningResult r)
+    public static TextTableSource Outages(OutageScreeningResult r)
     {
         var rows = new List<string[]>();
         foreach (ScenarioScreening s in r.Scenarios)
             for (int i = 0; i < s.Outages.Count; i++)
                 rows.Add(Row(s, i));
-        return new TextTable(Headers, rows);
+        return new TextTableSource(Headers, rows);
     }
 
     /// <summary>The outage behind each table row, in the same order, for row colours and detail.</summary>

@@ -35,7 +35,7 @@ public sealed class OutageView : View
             result = value;
             cases = value is null ? [] : OutageTables.Cases(value);
             heading.Content = value is null ? OutageTables.NotYet : OutageTables.Heading(value);
-            table.Table = value is null ? TextTable.Empty(OutageTables.Headers) : OutageTables.Outages(value);
+            table.Table = value is null ? TextTableSource.Empty(OutageTables.Headers) : OutageTables.Outages(value);
             table.Update();
             SetNeedsLayout();
         }

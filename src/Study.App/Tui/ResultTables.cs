@@ -26,7 +26,7 @@ public static class ResultTables
         _ => " ",
     };
 
-    public static TextTable Buses(LoadFlowResult r) => new(BusHeaders, r.Buses.Select(b => new[]
+    public static TextTableSource Buses(LoadFlowResult r) => new(BusHeaders, r.Buses.Select(b => new[]
     {
         b.Id,
         b.Kv > 0 ? F(b.Kv, "0.###") : "—",
@@ -40,7 +40,7 @@ public static class ResultTables
         F(b.QLoadMvar, "0.000"),
     }).ToList());
 
-    public static TextTable Branches(LoadFlowResult r) => new(BranchHeaders, r.Branches.Select(b => new[]
+    public static TextTableSource Branches(LoadFlowResult r) => new(BranchHeaders, r.Branches.Select(b => new[]
     {
         b.Id,
         b.Kind,

@@ -55,8 +55,8 @@ public sealed class ResultsView : Tabs
         set
         {
             result = value;
-            buses.Table = value is null ? TextTable.Empty(ResultTables.BusHeaders) : ResultTables.Buses(value);
-            branches.Table = value is null ? TextTable.Empty(ResultTables.BranchHeaders) : ResultTables.Branches(value);
+            buses.Table = value is null ? TextTableSource.Empty(ResultTables.BusHeaders) : ResultTables.Buses(value);
+            branches.Table = value is null ? TextTableSource.Empty(ResultTables.BranchHeaders) : ResultTables.Branches(value);
             chart.Result = value;
             buses.Update();
             branches.Update();
@@ -110,7 +110,7 @@ public sealed class ResultsView : Tabs
     /// <summary>A read-only table in the results style: full-row cursor, no outer lines.</summary>
     public static TableView ResultTable(string[] headers)
     {
-        var table = new TableView { Table = TextTable.Empty(headers), Width = Dim.Fill(), Height = Dim.Fill(), FullRowSelect = true };
+        var table = new TableView { Table = TextTableSource.Empty(headers), Width = Dim.Fill(), Height = Dim.Fill(), FullRowSelect = true };
         table.Style.ShowHorizontalHeaderOverline = false;
         table.Style.ShowHorizontalBottomLine = false;
         return table;

@@ -35,7 +35,7 @@ public static class TapStudyTables
     }
 
     /// <summary>One row per position: whether it fits, the worst margin, then watched voltages per scenario with ▼/▲ (* marks the file position).</summary>
-    public static TextTable Positions(TapStudyResult r)
+    public static TextTableSource Positions(TapStudyResult r)
     {
         var rows = new List<string[]>();
         var best = r.Recommended.Count > 0 ? r.Recommended[0].Position : (int?)null;
@@ -60,7 +60,7 @@ public static class TapStudyTables
             }
             rows.Add([.. cells]);
         }
-        return new TextTable(Headers(r), rows);
+        return new TextTableSource(Headers(r), rows);
     }
 
     /// <summary>Signed position as the tap table names it: +2, 0, -3.</summary>

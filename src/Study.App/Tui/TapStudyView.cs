@@ -44,7 +44,7 @@ public sealed class TapStudyView : View
         {
             result = value;
             summary.Content = value is null ? "No tap study yet (F8)." : TapStudyTables.Summary(value);
-            table.Table = value is null ? TextTable.Empty("Pos") : TapStudyTables.Positions(value);
+            table.Table = value is null ? TextTableSource.Empty("Pos") : TapStudyTables.Positions(value);
             table.Update();
             TapCurve? curve = value is null ? null : TapCurve.From(value);
             chart.Curve = curve;
@@ -55,7 +55,7 @@ public sealed class TapStudyView : View
 
     private Scheme? RowScheme(int row)
     {
-        if (table.Table is not TextTable t || row < 0 || row >= t.Rows) return null;
+        if (table.Table is not TextTableSource t || row < 0 || row >= t.Rows) return null;
         string fits = t.RowCells[row][2];
         if (fits == "no") return null;
         Attr normal = GetAttributeForRole(VisualRole.Normal);

@@ -58,7 +58,7 @@ public sealed class FormAndResultTests
                 new BusResult { Id = "B", VPu = 1.07, Violation = ViolationKind.High, VMin = 0.95, VMax = 1.05 },
             ],
         };
-        TextTable table = ResultTables.Buses(result);
+        TextTableSource table = ResultTables.Buses(result);
         Assert.Equal("0.9300▼", table.RowCells[0][2]);
         Assert.Equal("1.0700▲", table.RowCells[1][2]);
         IReadOnlyList<VoltageBarLine> bars = VoltageBars.Layout(result, 60);

@@ -30,7 +30,7 @@ public sealed class OutageTabTests
     {
         Network n = DemoNetwork.Read();
         OutageScreeningResult r = OutageScreening.Run(n, new OutageScreeningRequest { Scenarios = n.Scenarios });
-        TextTable table = OutageTables.Outages(r);
+        TextTableSource table = OutageTables.Outages(r);
         Assert.Equal(r.Scenarios.Sum(s => s.Outages.Count), table.Rows);
         Assert.Equal(OutageTables.Cases(r).Count, table.Rows);
         int at = 0;

@@ -41,7 +41,7 @@ public sealed class StudyTabTests
         var request = new TapStudyForm(n, "CQ-T1", null).Build().Request!;
         TapStudyResult r = TapStudy.Run(n, request);
         Assert.NotEmpty(r.Recommended);
-        TextTable table = TapStudyTables.Positions(r);
+        TextTableSource table = TapStudyTables.Positions(r);
         Assert.Equal(r.Max - r.Min + 1, table.Rows);
         string best = TapStudyTables.Pos(r.Recommended[0].Position);
         Assert.Contains(table.RowCells, row => row[0].TrimEnd('*') == best && row[2] == "best");
@@ -93,7 +93,7 @@ public sealed class StudyTabTests
     {
         Network n = DemoNetwork.Read();
         FaultResult r = FaultCall.Run(n, null, new FaultRequest { Buses = ["CQ11"], Kinds = FaultForm.AllKinds }, CancellationToken.None);
-        TextTable levels = FaultTables.Levels(r);
+        TextTableSource levels = FaultTables.Levels(r);
         Assert.Equal(4, levels.Rows);
         Assert.Equal("CQ11", levels.RowCells[0][0]);
         Assert.Equal("", levels.RowCells[1][0]);

@@ -1,12 +1,12 @@
-// A table of ready-formatted text cells: the one table source every TUI table uses.
+// Ready-formatted text cells as a Terminal.Gui table source: the one source every TUI table uses.
 using Terminal.Gui.Views;
 
 namespace Study.App.Tui;
 
 /// <summary>Headers and rows of text; views only display it.</summary>
-public sealed class TextTable(IReadOnlyList<string> headers, IReadOnlyList<string[]> rows) : ITableSource
+public sealed class TextTableSource(IReadOnlyList<string> headers, IReadOnlyList<string[]> rows) : ITableSource
 {
-    public static TextTable Empty(params string[] headers) => new(headers, []);
+    public static TextTableSource Empty(params string[] headers) => new(headers, []);
 
     public IReadOnlyList<string[]> RowCells => rows;
     public string[] ColumnNames { get; } = [.. headers];
