@@ -9,7 +9,7 @@ public static class NetworkLoading
 {
     /// <summary>Reads and validates; errors become one InputException listing every problem.</summary>
     /// <param name="clock">When given, the reading and the validation are timed as stages "read" and "validate".</param>
-    public static Network ReadValid(string path, TextWriter err, StageClock? clock = null)
+    public static Network ReadValid(string path, StageClock? clock = null)
     {
         Network network = NetworkFile.Read(path);
         clock?.Lap("read");

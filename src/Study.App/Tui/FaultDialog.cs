@@ -40,7 +40,7 @@ public static class FaultDialog
             Labels = [form.SelectedBus is { } bus ? $"bus {bus}" : "selected bus (none)", "all buses"],
             Value = form.AllBuses ? 1 : 0,
         };
-        var caution = new TextPane { X = 0, Y = 9, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + ResultsView.FaultCaution };
+        var caution = new TextPane { X = 0, Y = 9, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
         dialog.Add(kindsLabel);
         foreach (CheckBox box in boxes) dialog.Add(box);

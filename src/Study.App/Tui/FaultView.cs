@@ -13,7 +13,7 @@ namespace Study.App.Tui;
 /// </summary>
 public sealed class FaultView : View
 {
-    private readonly TextPane caution = new() { CanFocus = false, Content = CautionText(ResultsView.FaultCaution) };
+    private readonly TextPane caution = new() { CanFocus = false, Content = CautionText(FaultStudy.Caution) };
     private readonly TextPane heading = new() { CanFocus = false, Content = "No fault study yet (F7)." };
     private readonly TableView levels = ResultsView.ResultTable(FaultTables.LevelHeaders);
     private readonly TableView breakers = ResultsView.ResultTable(FaultTables.BreakerHeaders);
@@ -41,7 +41,7 @@ public sealed class FaultView : View
         set
         {
             result = value;
-            caution.Content = CautionText(value?.Caution ?? ResultsView.FaultCaution);
+            caution.Content = CautionText(value?.Caution ?? FaultStudy.Caution);
             heading.Content = value is null ? "No fault study yet (F7)." : FaultTables.Heading(value);
             levels.Table = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
             breakers.Table = value is null ? TextTableSource.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);

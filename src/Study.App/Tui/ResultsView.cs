@@ -12,9 +12,6 @@ namespace Study.App.Tui;
 /// <summary>Tabs: Detail, Buses, Branches, Faults, Tap study, One-line, Voltage chart, Outages.</summary>
 public sealed class ResultsView : Tabs
 {
-    /// <summary>The caution every fault screen carries; the engine owns the wording.</summary>
-    public const string FaultCaution = FaultStudy.Caution;
-
     private readonly TextPane detail = new();
     private readonly TableView buses = ResultTable(ResultTables.BusHeaders);
     private readonly TableView branches = ResultTable(ResultTables.BranchHeaders);

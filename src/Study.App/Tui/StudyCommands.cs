@@ -26,7 +26,7 @@ public sealed class StudyCommands(MainWindow main)
                 main.Results.FaultResult = result;
                 main.ShowStudyTab(main.Results.FaultsTab);
             },
-            message => Prompts.Tell(App, "Fault study", message + "\n\n" + ResultsView.FaultCaution));
+            message => Prompts.Tell(App, "Fault study", message + "\n\n" + FaultStudy.Caution));
     }
 
     public void TapStudy()
