@@ -23,8 +23,11 @@ public abstract class Command
     protected virtual IEnumerable<string> ValueOptions => [];
     protected virtual IEnumerable<string> Flags => ["json"];
 
+    /// <summary>Single-dash short forms of this command's options, e.g. "-o" for "--output".</summary>
+    protected virtual IReadOnlyDictionary<string, string> ShortForms { get; } = new Dictionary<string, string>();
+
     public int Run(IReadOnlyList<string> args, CommandContext context) =>
-        Execute(new Arguments(args, ValueOptions, Flags), context);
+        Execute(new Arguments(args.Select(a => ShortForms.TryGetValue(a, out string? full) ? full : a).ToList(), ValueOptions, Flags), context);
 
     protected abstract int Execute(Arguments args, CommandContext context);
 }

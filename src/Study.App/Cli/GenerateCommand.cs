@@ -12,9 +12,7 @@ public sealed class GenerateCommand : Command
     protected override IEnumerable<string> ValueOptions => ["buses", "seed", "output"];
     protected override IEnumerable<string> Flags => [];
 
-    /// <summary>Accepts "-o FILE" as the short form of "--output FILE".</summary>
-    public static IReadOnlyList<string> ExpandShortOptions(IReadOnlyList<string> args) =>
-        args.Select(a => a == "-o" ? "--output" : a).ToList();
+    protected override IReadOnlyDictionary<string, string> ShortForms { get; } = new Dictionary<string, string> { ["-o"] = "--output" };
 
     protected override int Execute(Arguments args, CommandContext context)
     {

@@ -37,7 +37,7 @@ public static class StudyCommand
         }
         try
         {
-            return command.Run(GenerateCommand.ExpandShortOptions(args.Skip(1).ToList()), context);
+            return command.Run(args.Skip(1).ToList(), context);
         }
         catch (UsageException e)
         {
