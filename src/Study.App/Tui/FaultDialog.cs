@@ -45,8 +45,6 @@ public static class FaultDialog
         dialog.Add(kindsLabel);
         foreach (CheckBox box in boxes) dialog.Add(box);
         dialog.Add(methodLabel, method, levelLabel, level, whereLabel, where, caution, status);
-        dialog.AddButton(new Button { Text = "Cancel" });
-        var run = new Button { Text = "Run" };
         void Read()
         {
             form.Kinds.Clear();
@@ -56,19 +54,6 @@ public static class FaultDialog
             form.Level = level.Value == 1 ? FaultLevel.Min : FaultLevel.Max;
             form.AllBuses = where.Value == 1;
         }
-        run.Accepting += (_, e) =>
-        {
-            Read();
-            if (form.Build().Error is not { } error) return;
-            e.Handled = true;
-            status.Text = error;
-        };
-        dialog.AddButton(run);
-        run.SetFocus();
-        app.Run(dialog);
-        Read();
-        bool accepted = dialog.Result == 1 && form.Build().Error is null;
-        dialog.Dispose();
-        return accepted;
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
     }
 }

@@ -26,22 +26,7 @@ public static class OutageDialog
         };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running screening" };
         dialog.Add(what, scenLabel, scenarios, status);
-        dialog.AddButton(new Button { Text = "Cancel" });
-        var run = new Button { Text = "Run" };
         void Read() => form.AllScenarios = scenarios.Value == 1;
-        run.Accepting += (_, e) =>
-        {
-            Read();
-            if (form.Build().Error is not { } error) return;
-            e.Handled = true;
-            status.Text = error;
-        };
-        dialog.AddButton(run);
-        scenarios.SetFocus();
-        app.Run(dialog);
-        Read();
-        bool accepted = dialog.Result == 1 && form.Build().Error is null;
-        dialog.Dispose();
-        return accepted;
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error, scenarios);
     }
 }

@@ -8,6 +8,31 @@ namespace Study.App.Tui;
 /// <summary>The modal questions the main window asks. Esc always answers "cancel" (null).</summary>
 public static class Prompts
 {
+    /// <summary>
+    /// Adds Cancel and Run to a study dialog and runs it. Run reads the fields into the form and keeps
+    /// the dialog open, with the form's message in <paramref name="status"/>, until the form is valid.
+    /// True when the user ran it with a valid form.
+    /// </summary>
+    public static bool RunStudyDialog(IApplication app, Dialog dialog, Label status, Action read, Func<string?> error, View? focus = null)
+    {
+        dialog.AddButton(new Button { Text = "Cancel" });
+        var run = new Button { Text = "Run" };
+        run.Accepting += (_, e) =>
+        {
+            read();
+            if (error() is not { } message) return;
+            e.Handled = true;
+            status.Text = message;
+        };
+        dialog.AddButton(run);
+        (focus ?? run).SetFocus();
+        app.Run(dialog);
+        read();
+        bool accepted = dialog.Result == 1 && error() is null;
+        dialog.Dispose();
+        return accepted;
+    }
+
     /// <summary>Index of the chosen button, null on Esc. The last button is the default.</summary>
     public static int? Ask(IApplication app, string title, string text, params string[] buttons) =>
         MessageBox.Query(app, title, text, buttons);

@@ -29,16 +29,6 @@ public static class TapStudyDialog
         };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels" };
         dialog.Add(bandLabel, low, highLabel, high, bandHint, watchLabel, watch, watchHint, scenLabel, scenarios, status);
-        dialog.AddButton(new Button { Text = "Cancel" });
-        var run = new Button { Text = "Run" };
-        run.Accepting += (_, e) =>
-        {
-            Read();
-            if (form.Build().Error is not { } error) return;
-            e.Handled = true;
-            status.Text = error;
-        };
-        dialog.AddButton(run);
         void Read()
         {
             form.BandLowText = low.Text;
@@ -46,11 +36,6 @@ public static class TapStudyDialog
             form.WatchText = watch.Text;
             form.AllScenarios = scenarios.Value != 1;
         }
-        low.SetFocus();
-        app.Run(dialog);
-        Read();
-        bool accepted = dialog.Result == 1 && form.Build().Error is null;
-        dialog.Dispose();
-        return accepted;
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error, low);
     }
 }
