@@ -18,7 +18,7 @@ public sealed class CheckCommand : Command
         Network network = NetworkFile.Read(path);
         ValidationReport report = NetworkValidator.Validate(network);
         if (args.Has("json"))
-            context.Out.Write(CliJson.Serialize(CheckJson.From(path, report)));
+            CliJson.Write(context, CheckJson.From(path, report));
         else
             WriteReport(context.Out, path, network, report);
         return report.HasErrors ? ExitCode.InputError : ExitCode.Done;

@@ -58,9 +58,8 @@ public sealed class CompareCommand : Command
         bool converged = result.BeforeConverged && result.AfterConverged;
         if (converged && args.Value("csv") is string dir) CompareCsv.Write(result, dir);
         if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
-        context.Out.Write(args.Has("json")
-            ? CliJson.Serialize(CompareJson.From(result, beforeSide.Label, afterSide.Label))
-            : PlainTextReport.Render(report));
+        if (args.Has("json")) CliJson.Write(context, CompareJson.From(result, beforeSide.Label, afterSide.Label));
+        else context.Out.Write(PlainTextReport.Render(report));
         if (converged) return ExitCode.Done;
         if (!result.BeforeConverged) context.Err.WriteLine($"error: {beforePath}: the load flow did not converge: {result.BeforeMessage}");
         if (!result.AfterConverged) context.Err.WriteLine($"error: {afterPath}: the load flow did not converge: {result.AfterMessage}");

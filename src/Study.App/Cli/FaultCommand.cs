@@ -84,11 +84,15 @@ public sealed class FaultCommand : Command
         };
         FaultResult result = FaultStudy.Run(model, request);
         clock?.Lap("faults");
-        string text = FaultReport.Render(path, network, result, detail: buses.Count > 0);
-        if (args.Value("markdown") is string markdown)
-            Reports.ReportFiles.WriteMarkdown(markdown, Reports.FaultMarkdown.Build(path, network, result, request, scenario?.Name, text));
+        bool json = args.Has("json");
+        string? markdown = args.Value("markdown");
+        // The readable report is built only when something shows it: --json alone never does.
+        string? text = !json || markdown is not null ? FaultReport.Render(path, network, result, detail: buses.Count > 0) : null;
+        if (markdown is not null)
+            Reports.ReportFiles.WriteMarkdown(markdown, Reports.FaultMarkdown.Build(path, network, result, request, scenario?.Name, text!));
         clock?.Lap("report");
-        context.Out.Write(args.Has("json") ? CliJson.Serialize(FaultJson.From(result) with { Timings = clock?.ToJson() }) : text + clock?.Render());
+        if (json) CliJson.Write(context, FaultJson.From(result) with { Timings = clock?.ToJson() });
+        else context.Out.Write(text + clock?.Render());
         return ExitCode.Done;
     }
 }

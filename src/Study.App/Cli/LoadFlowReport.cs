@@ -8,9 +8,6 @@ namespace Study.App.Cli;
 
 public static class LoadFlowReport
 {
-    public static string Render(string path, Network network, LoadFlowResult r, PublishedComparison? published) =>
-        PlainTextReport.Render(Build(path, network, r, published));
-
     public static ReportDocument Build(string path, Network network, LoadFlowResult r, PublishedComparison? published,
         LoadFlowOptions? options = null)
     {

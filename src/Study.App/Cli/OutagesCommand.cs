@@ -46,7 +46,8 @@ public sealed class OutagesCommand : Command
         if (args.Has("json"))
         {
             var json = result.Scenarios.Select(OutagesJson.From).ToList();
-            context.Out.Write(json.Count == 1 ? CliJson.Serialize(json[0]) : CliJson.Serialize(json));
+            if (json.Count == 1) CliJson.Write(context, json[0]);
+            else CliJson.Write(context, json);
         }
         else context.Out.Write(PlainTextReport.Render(report));
 

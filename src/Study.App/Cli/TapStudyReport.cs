@@ -12,7 +12,6 @@ public static class TapStudyReport
 {
     private const int ChartWidth = 48;
 
-    public static string Render(string path, Network network, TapStudyResult r) => PlainTextReport.Render(Build(path, network, r));
 
     public static ReportDocument Build(string path, Network network, TapStudyResult r, LoadFlowOptions? options = null)
     {

@@ -53,7 +53,8 @@ public sealed class TapsCommand : Command
         var report = TapStudyReport.Build(path, network, result, LoadFlowOptions.Default);
         if (args.Value("csv") is string dir) TapStudyCsv.Write(result, dir);
         if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
-        context.Out.Write(args.Has("json") ? CliJson.Serialize(TapsJson.From(result)) : PlainTextReport.Render(report));
+        if (args.Has("json")) CliJson.Write(context, TapsJson.From(result));
+        else context.Out.Write(PlainTextReport.Render(report));
         return result.Points.All(p => !p.Converged) ? ExitCode.NoConvergence : ExitCode.Done;
     }
 }
