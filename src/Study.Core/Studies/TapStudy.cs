@@ -127,19 +127,27 @@ public static class TapStudy
     /// <summary>The lv bus and every bus reached from it through lines alone (its own voltage level).</summary>
     internal static IReadOnlyList<string> FedBuses(Network network, string lvBus)
     {
+        var neighbours = new Dictionary<string, List<string>>();
+        void Link(string a, string b)
+        {
+            if (!neighbours.TryGetValue(a, out var list)) neighbours[a] = list = [];
+            list.Add(b);
+        }
+        foreach (Line l in network.Lines.Where(l => l.InService))
+        {
+            Link(l.From, l.To);
+            Link(l.To, l.From);
+        }
         var seen = new List<string> { lvBus };
+        var visited = new HashSet<string> { lvBus };
         var queue = new Queue<string>([lvBus]);
         while (queue.Count > 0)
-        {
-            string bus = queue.Dequeue();
-            foreach (Line l in network.Lines.Where(l => l.InService && (l.From == bus || l.To == bus)))
-            {
-                string other = l.From == bus ? l.To : l.From;
-                if (seen.Contains(other)) continue;
-                seen.Add(other);
-                queue.Enqueue(other);
-            }
-        }
+            foreach (string other in neighbours.GetValueOrDefault(queue.Dequeue()) ?? [])
+                if (visited.Add(other))
+                {
+                    seen.Add(other);
+                    queue.Enqueue(other);
+                }
         return seen;
     }
 }
