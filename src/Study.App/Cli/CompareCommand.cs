@@ -35,7 +35,7 @@ public sealed class CompareCommand : Command
             args.ExpectPositionals(1);
             if (args.Value("scenario") is not null) throw new UsageException("give --scenario NAME or --scenarios A,B, not both");
             if (pair.Count != 2) throw new UsageException("--scenarios needs two scenario names separated by a comma, e.g. winter-peak,summer-night");
-            before = after = NetworkLoading.ReadValid(beforePath);
+            before = after = NetworkLoading.ReadValid(beforePath, context.Err);
             afterPath = beforePath;
             beforeScenario = NetworkLoading.PickScenario(before, pair[0]);
             afterScenario = NetworkLoading.PickScenario(after, pair[1]);
@@ -44,8 +44,8 @@ public sealed class CompareCommand : Command
         {
             afterPath = args.Positional(1, "AFTER (a network file), or --scenarios A,B to compare two scenarios of one file");
             args.ExpectPositionals(2);
-            before = NetworkLoading.ReadValid(beforePath);
-            after = NetworkLoading.ReadValid(afterPath);
+            before = NetworkLoading.ReadValid(beforePath, context.Err);
+            after = NetworkLoading.ReadValid(afterPath, context.Err);
             beforeScenario = NetworkLoading.PickScenario(before, args.Value("scenario"));
             afterScenario = NetworkLoading.PickScenario(after, args.Value("scenario"));
         }

@@ -58,7 +58,7 @@ public sealed class FaultCommand : Command
         if (zf.Real < 0) throw new UsageException("--zf resistance must not be negative");
 
         StageClock? clock = args.Has("timings") ? new StageClock() : null;
-        Network network = NetworkLoading.ReadValid(path, clock);
+        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
         Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
         PerUnitModel model = PerUnitModel.Build(network, scenario);
         clock?.Lap("build");

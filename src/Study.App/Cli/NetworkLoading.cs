@@ -7,9 +7,13 @@ namespace Study.App.Cli;
 
 public static class NetworkLoading
 {
-    /// <summary>Reads and validates; errors become one InputException listing every problem.</summary>
+    /// <summary>
+    /// Reads and validates; errors become one InputException listing every problem. Warnings do not
+    /// stop the study but are written to <paramref name="err"/>, so a likely mistake (sides swapped,
+    /// kV typed as pu) is never solved in silence.
+    /// </summary>
     /// <param name="clock">When given, the reading and the validation are timed as stages "read" and "validate".</param>
-    public static Network ReadValid(string path, StageClock? clock = null)
+    public static Network ReadValid(string path, TextWriter err, StageClock? clock = null)
     {
         Network network = NetworkFile.Read(path);
         clock?.Lap("read");
@@ -23,6 +27,9 @@ public static class NetworkLoading
                 + string.Join("\n  ", errors.Take(10).Select(p => p.Describe()))
                 + (errors.Count > 10 ? $"\n  ... and {errors.Count - 10} more" : ""));
         }
+        var warnings = report.Problems.Where(p => p.Severity == Severity.Warning).ToList();
+        foreach (Problem w in warnings.Take(5)) err.WriteLine(w.Describe());
+        if (warnings.Count > 5) err.WriteLine($"... and {warnings.Count - 5} more warnings; run 'study check {path}' for all of them");
         return network;
     }
 

@@ -30,7 +30,7 @@ public sealed class OutagesCommand : Command
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
             throw new UsageException("give --scenario NAME or --all-scenarios, not both");
 
-        Network network = NetworkLoading.ReadValid(path);
+        Network network = NetworkLoading.ReadValid(path, context.Err);
         IReadOnlyList<Scenario> scenarios = args.Value("scenario") is string name
             ? [NetworkLoading.PickScenario(network, name)!]
             : network.Scenarios;

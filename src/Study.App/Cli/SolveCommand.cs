@@ -45,7 +45,7 @@ public sealed class SolveCommand : Command
         if (options.MaxIterations < 1) throw new UsageException("--max-iterations must be at least 1");
 
         StageClock? clock = args.Has("timings") ? new StageClock() : null;
-        Network network = NetworkLoading.ReadValid(path, clock);
+        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
         Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
         PerUnitModel model = PerUnitModel.Build(network, scenario);
         clock?.Lap("build");

@@ -37,7 +37,7 @@ public sealed class TapsCommand : Command
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
             throw new UsageException("give --scenario NAME or --all-scenarios, not both");
 
-        Network network = NetworkLoading.ReadValid(path);
+        Network network = NetworkLoading.ReadValid(path, context.Err);
         IReadOnlyList<Scenario> scenarios = args.Value("scenario") is string name
             ? [NetworkLoading.PickScenario(network, name)!]
             : network.Scenarios;
