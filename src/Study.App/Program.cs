@@ -1,6 +1,6 @@
 // The `study` executable: subcommands go to the command line; no argument or a file opens the terminal UI.
 using Study.App.Cli;
-using Study.App.Tui;
+using Study.App.Tui.Shell;
 
 if (args.Length == 0 || (args.Length == 1 && !StudyCommand.IsCommand(args[0]) && !args[0].StartsWith('-')))
     return StudyTui.Run(args.Length == 0 ? null : args[0]);

@@ -1,5 +1,12 @@
 // Entry point of the command line: picks the subcommand, runs it, turns failures into exit codes.
-using Study.Core.Io;
+using Study.App.Cli.Compare;
+using Study.App.Cli.Faults;
+using Study.App.Cli.Files;
+using Study.App.Cli.Outages;
+using Study.App.Cli.Scale;
+using Study.App.Cli.Solve;
+using Study.App.Cli.Taps;
+using Study.Core.Model;
 
 namespace Study.App.Cli;
 

@@ -1,5 +1,5 @@
 // The shunt fault types a study can place at a bus, and their short names on the command line.
-using Study.Core.Io;
+using Study.Core.Model;
 
 namespace Study.Core.Faults;
 

@@ -1,7 +1,8 @@
 // Faults at one bus after another on factorised sequence networks: one Z-bus column per network per bus.
 using System.Numerics;
-using Study.Core.Io;
+using Study.Core.Admittance;
 using Study.Core.LoadFlow;
+using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.Faults;

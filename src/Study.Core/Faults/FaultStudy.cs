@@ -1,7 +1,7 @@
 // Entry point of fault studies: sequence networks once, then every requested bus and fault type, then breaker duty.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.LoadFlow;
+using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.Faults;

@@ -1,6 +1,5 @@
 // The branches of each sequence network: corrected impedances, rated ratios, zero-sequence paths by vector group.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

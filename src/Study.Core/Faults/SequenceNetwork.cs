@@ -1,5 +1,6 @@
 // One sequence network assembled and factorised once: Z-bus columns by one solve per faulted bus.
 using System.Numerics;
+using Study.Core.Admittance;
 using Study.Core.LoadFlow;
 using Study.Core.Numerics;
 using Study.Core.Units;

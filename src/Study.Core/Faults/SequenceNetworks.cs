@@ -1,5 +1,6 @@
 // Builds the positive, negative, zero and equivalent-frequency networks of one model for one fault study.
 using System.Numerics;
+using Study.Core.Admittance;
 using Study.Core.LoadFlow;
 using Study.Core.Units;
 

@@ -70,7 +70,7 @@ internal sealed class SourceAdmittances
             {
                 var znOhm = new Complex(earthing.ROhm, earthing.XOhm);
                 if (znOhm != Complex.Zero && !(kv > 0))
-                    throw new Io.InputException("the neutral impedance is in ohm but the bus kV is not stated", elementId: g.Id);
+                    throw new InputException("the neutral impedance is in ohm but the bus kV is not stated", elementId: g.Id);
                 Complex zn = znOhm == Complex.Zero ? Complex.Zero : znOhm / (kv * kv / model.BaseMva);
                 zero[source.Bus] += 1.0 / (kG * z0 + 3 * zn);
             }

@@ -1,6 +1,6 @@
 // IEC 60076-1 vector-group notation (YNd11, Dyn1, YNyn0d1, Yzn11): winding connections and clock numbers.
 using System.Globalization;
-using Study.Core.Io;
+using Study.Core.Model;
 
 namespace Study.Core.Faults;
 

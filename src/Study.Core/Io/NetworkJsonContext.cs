@@ -16,3 +16,10 @@ namespace Study.Core.Io;
     Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapSide>)])]
 [JsonSerializable(typeof(Network))]
 internal sealed partial class NetworkJsonContext : JsonSerializerContext;
+
+/// <summary>
+/// The file's enum keys ("mode", "side") by name, as the model's names are spelled; a number is a
+/// wrong type of value, not an index into the enum (which would also admit values with no meaning).
+/// </summary>
+internal sealed class NamedEnumConverter<TEnum>() : JsonStringEnumConverter<TEnum>(namingPolicy: null, allowIntegerValues: false)
+    where TEnum : struct, Enum;

@@ -93,4 +93,19 @@ internal sealed class BusSchedule
 
     /// <summary>dS_load/d|V| at bus i.</summary>
     public Complex LoadSlope(int i, double v) => constantCurrent[i] + constantImpedance[i] * (2 * v);
+
+    /// <summary>Marks every bus of an island without a slack bus as dead (de-energised).</summary>
+    public static int MarkDead(BusType[] type, int[] label)
+    {
+        var live = new HashSet<int>();
+        for (int i = 0; i < type.Length; i++) if (type[i] == BusType.Slack) live.Add(label[i]);
+        int dead = 0;
+        for (int i = 0; i < type.Length; i++)
+        {
+            if (live.Contains(label[i])) continue;
+            type[i] = BusType.Dead;
+            dead++;
+        }
+        return dead;
+    }
 }

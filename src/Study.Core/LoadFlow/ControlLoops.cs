@@ -1,4 +1,5 @@
 // The outer control loops of the load flow: generator reactive limits and on-load tap regulation.
+using Study.Core.Admittance;
 using Study.Core.Units;
 
 namespace Study.Core.LoadFlow;

@@ -1,5 +1,6 @@
 // Turns the solved state into result records: bus voltages, branch flows at both ends, totals, violations.
 using System.Numerics;
+using Study.Core.Admittance;
 using Study.Core.Units;
 
 namespace Study.Core.LoadFlow;

@@ -1,5 +1,6 @@
 // The load flow: Newton-Raphson inside outer control loops for reactive limits and on-load taps.
 using System.Diagnostics;
+using Study.Core.Admittance;
 using Study.Core.Units;
 
 namespace Study.Core.LoadFlow;
@@ -18,7 +19,7 @@ public static class LoadFlowSolver
         long start = Stopwatch.GetTimestamp();
         var schedule = new BusSchedule(model);
         int[] island = Islands.Label(model);
-        Islands.MarkDead(schedule.Type, island);
+        BusSchedule.MarkDead(schedule.Type, island);
         var y = new AdmittanceMatrix(model);
         long admittance = Stopwatch.GetTimestamp();
         var nr = new NewtonRaphson(y, schedule);

@@ -1,5 +1,6 @@
 // Polar Newton-Raphson on a sparse Jacobian with a fixed pattern, re-filled in place every iteration.
 using System.Numerics;
+using Study.Core.Admittance;
 using Study.Core.Numerics;
 
 namespace Study.Core.LoadFlow;
@@ -106,7 +107,7 @@ internal sealed class NewtonRaphson
             diagQV[k] = dQdV[p];
         }
         // Minimum degree on the 2m-node pattern: on the generated grids it fills less than minimum
-        // degree on the bus graph expanded to 2×2 blocks (BlockOrdering; bench/RESULTS.md).
+        // degree on the bus graph expanded to 2×2 blocks (BlockOrdering; DEVELOPERS.md, "Measured speed").
         lu = SparseLu<double>.Analyse(jacobian);
     }
 

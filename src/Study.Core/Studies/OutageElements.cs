@@ -1,5 +1,4 @@
 // Which elements an outage screening takes out, and the network with one of them out of service.
-using Study.Core.Io;
 using Study.Core.Model;
 
 namespace Study.Core.Studies;

@@ -1,5 +1,4 @@
 // Tap study: solve every position of one transformer's tap in every scenario and rank the positions.
-using Study.Core.Io;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Units;

@@ -1,5 +1,6 @@
 // Synthetic transmission-like networks of any size, with a known exact load-flow solution.
 using System.Numerics;
+using Study.Core.Admittance;
 using Study.Core.Model;
 using Study.Core.Numerics;
 
@@ -190,7 +191,7 @@ public static class SyntheticGrid
         var current = new Complex[n];
         foreach (SyntheticBranch b in branches)
         {
-            var y = LoadFlow.BranchAdmittance.Of(new Complex(b.R, b.X), b.B, b.Ratio, 0, Complex.Zero);
+            var y = Admittance.BranchAdmittance.Of(new Complex(b.R, b.X), b.B, b.Ratio, 0, Complex.Zero);
             current[b.From] += y.Yff * v[b.From] + y.Yft * v[b.To];
             current[b.To] += y.Ytf * v[b.From] + y.Ytt * v[b.To];
         }

@@ -1,5 +1,4 @@
 // Base impedance and current of a bus from the system MVA base and the bus base kV.
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

@@ -41,3 +41,10 @@ internal sealed class Derivation(bool record = true)
     /// <summary>A number as it appears inside a formula: six significant digits, invariant culture.</summary>
     public static string N(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
 }
+
+/// <summary>
+/// One step from nameplate data towards a system per-unit value: what it is, the formula with its
+/// numbers substituted, and the result. <paramref name="Note"/> is set when the value is a default
+/// or an assumption rather than data, so nobody mistakes it for data.
+/// </summary>
+public sealed record DerivationStep(string Label, string Formula, double Value, string Unit, string? Note = null);

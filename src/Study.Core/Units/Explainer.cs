@@ -1,6 +1,5 @@
 // Finds an element by id and traces it from its data to the per-unit values the engine uses.
 using System.Globalization;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 
@@ -160,3 +159,13 @@ public static class Explainer
         }
     }
 }
+
+/// <summary>One input as the file gives it, value already formatted (invariant culture) with its unit.</summary>
+public sealed record ExplainedInput(string Name, string Value, string Unit);
+
+/// <summary>
+/// An element traced from its data to the system-base per-unit values the engine uses. Steps whose
+/// <see cref="DerivationStep.Note"/> is set are defaults or assumptions, not data.
+/// </summary>
+public sealed record ElementExplanation(
+    string Id, ElementKind Kind, string Title, IReadOnlyList<ExplainedInput> Inputs, IReadOnlyList<DerivationStep> Steps);

@@ -1,6 +1,5 @@
 // Line and cable impedance from per-km data, ohm totals or system per-unit, to the system base.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

@@ -1,6 +1,5 @@
 // Magnetising (no-load) admittance of a transformer from its no-load test, on the system base.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

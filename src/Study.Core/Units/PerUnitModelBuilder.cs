@@ -1,6 +1,5 @@
 // Compiles a Network (engineering units) into the indexed per-unit PerUnitModel the solvers read.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

@@ -1,6 +1,5 @@
 // Network feeder impedance of a supply point from its declared fault level (IEC 60909-0).
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

@@ -1,6 +1,5 @@
 // Three-winding transformer: pairwise short-circuit impedances to a star of three winding branches.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

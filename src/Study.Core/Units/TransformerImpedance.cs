@@ -1,6 +1,5 @@
 // Two-winding transformer from nameplate (or system per-unit) data to its π model on the system base.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Units.Derivation;
 

@@ -1,4 +1,5 @@
 // The editing core: add, edit, delete, duplicate, undo/redo, dirty flag, save and recovery.
+using Study.App.Tui.Editing;
 using Study.App.Tui;
 using Study.Core.Io;
 using Study.Core.Model;

@@ -1,4 +1,7 @@
 // Edit forms and result formatting, without a screen: what the form accepts and what the tables say.
+using Study.App.Tui.Editing;
+using Study.App.Tui.LoadFlow;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

@@ -1,4 +1,6 @@
 // Keyboard navigation of the main screen, headless: from the kind list into the table and down to an element.
+using Study.App.Tui.Editing;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.Model;
 using Terminal.Gui.App;

@@ -1,4 +1,6 @@
 // The Outages tab: the dialog's question, the ranked table read without colour, the tab at 80×24, the key.
+using Study.App.Tui.Outages;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.Model;
 using Study.Core.Studies;

@@ -1,4 +1,6 @@
 // Headless screens at 80×24: the element list with counts, and the results view's low-voltage marker.
+using Study.App.Tui.Editing;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.LoadFlow;
 using Terminal.Gui.App;

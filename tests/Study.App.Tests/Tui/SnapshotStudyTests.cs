@@ -1,4 +1,7 @@
 // A load flow running in the background while the network is edited: the study keeps its snapshot, the session keeps the edits.
+using Study.App.Tui.Editing;
+using Study.App.Tui.LoadFlow;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

@@ -1,4 +1,6 @@
 // Headless study screens at 80×24: the fault caution stays on top of the Faults tab; the tap tab shows the finding.
+using Study.App.Tui.Faults;
+using Study.App.Tui.Shell;
 using Study.App.Tui;
 using Study.Core.Faults;
 using Study.Core.Model;

@@ -1,4 +1,9 @@
 // The study tabs without a screen: tap-study question and tables, fault tables, one-line rows, scenarios.
+using Study.App.Tui.Editing;
+using Study.App.Tui.Faults;
+using Study.App.Tui.LoadFlow;
+using Study.App.Tui.Shell;
+using Study.App.Tui.Taps;
 using Study.App.Tui;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
@@ -67,12 +72,11 @@ public sealed class StudyTabTests
     public void Applying_a_tap_position_is_one_undoable_edit()
     {
         var session = EditSession.Untitled(DemoNetwork.Read(), Path.GetTempPath());
-        Network next = TapPosition.Set(session.Network, "CQ-T1", -1)!;
-        session.Apply(next);
+        Assert.True(session.SetTapPosition("CQ-T1", -1));
         Assert.Equal(-1, session.Network.Transformers.Single(t => t.Id == "CQ-T1").Tap!.Position);
         Assert.True(session.Undo());
         Assert.Equal(0, session.Network.Transformers.Single(t => t.Id == "CQ-T1").Tap!.Position);
-        Assert.Null(TapPosition.Set(session.Network, "NO-SUCH", 1));
+        Assert.False(session.SetTapPosition("NO-SUCH", 1));
         session.Close();
     }
 

@@ -1,6 +1,5 @@
 // The bundled demo network end to end, and the input errors a fault study reports.
 using Study.Core.Faults;
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 using static Study.Core.Tests.Faults.FaultNetworks;

@@ -1,6 +1,5 @@
 // Zero-sequence paths through transformer banks by vector group (common practice, any protection text).
 using Study.Core.Faults;
-using Study.Core.Io;
 using Study.Core.Model;
 using static Study.Core.Tests.Faults.FaultNetworks;
 

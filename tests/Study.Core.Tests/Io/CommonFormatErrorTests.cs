@@ -1,6 +1,7 @@
 // Malformed IEEE Common Format input: every problem is an InputException at its line and column.
-using Study.Core.Io;
 using static Study.Core.Tests.Io.CommonFormatReaderTests;
+using Study.Core.Io;
+using Study.Core.Model;
 
 namespace Study.Core.Tests.Io;
 

@@ -1,5 +1,6 @@
 // The IEEE Common Format reader on damaged cases: a Network or an InputException at line and column.
 using Study.Core.Io;
+using Study.Core.Model;
 using Xunit.Abstractions;
 
 namespace Study.Core.Tests.Properties;

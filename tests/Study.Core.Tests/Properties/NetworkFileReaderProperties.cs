@@ -1,5 +1,6 @@
 // The network file reader on damaged files: a Network or a located InputException, never anything else.
 using Study.Core.Io;
+using Study.Core.Model;
 using Xunit.Abstractions;
 
 namespace Study.Core.Tests.Properties;

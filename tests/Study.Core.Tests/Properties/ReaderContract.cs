@@ -1,5 +1,4 @@
 // The promise every reader makes: a Network, or an InputException that says where — and nothing after it throws.
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Model.Validation;
 using Study.Core.Units;

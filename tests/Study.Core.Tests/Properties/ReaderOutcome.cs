@@ -1,4 +1,5 @@
 // How far one input got through the pipeline: refused by the reader, invalid, refused by the build, or built.
+using Study.Core.Model;
 namespace Study.Core.Tests.Properties;
 
 /// <summary>How far one input got through read, validate and build.</summary>

@@ -1,5 +1,6 @@
 // Counter-examples the reader properties found in enum keys: numbers were taken as enum indices.
 using Study.Core.Io;
+using Study.Core.Model;
 
 namespace Study.Core.Tests.Regression;
 

@@ -1,5 +1,6 @@
 // Counter-examples the reader properties found in the network file reader, kept as plain checks.
 using Study.Core.Io;
+using Study.Core.Model;
 
 namespace Study.Core.Tests.Regression;
 

@@ -1,5 +1,4 @@
 // Outage screening: islanded load is counted, a bank's outage overloads its partner, the order never depends on threads.
-using Study.Core.Io;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;

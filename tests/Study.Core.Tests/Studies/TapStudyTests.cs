@@ -1,5 +1,4 @@
 // Tap study: it agrees with a hand sweep of individual solves and says clearly when no position works.
-using Study.Core.Io;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;

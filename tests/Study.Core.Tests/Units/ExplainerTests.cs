@@ -1,5 +1,4 @@
 // `study explain`: every element traced back to its data with the numbers the engine uses.
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

@@ -1,6 +1,5 @@
 // Line conversion from per-km, ohm and per-unit data (DESIGN.md per-unit conventions, common practice).
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

@@ -1,5 +1,4 @@
 // Compiling a hand-made network into the indexed per-unit model, and stepping a tap on the result.
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

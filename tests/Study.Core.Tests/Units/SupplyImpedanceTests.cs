@@ -1,5 +1,4 @@
 // Network feeder impedance from the declared fault level (IEC 60909-0, from memory).
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

@@ -1,6 +1,5 @@
 // Two-winding transformer nameplate data to the system base, tap ratio and magnetising branch.
 using System.Numerics;
-using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Units;
 

@@ -1,5 +1,6 @@
 // Renders a report document as Markdown (CommonMark with pipe tables) to attach to a study note.
 using System.Text;
+using Study.Core.Io;
 
 namespace Study.App.Cli.Reports;
 
@@ -69,4 +70,9 @@ public static class MarkdownReport
         }
         return sb.ToString();
     }
+}
+
+public static class ReportFiles
+{
+    public static void WriteMarkdown(string path, ReportDocument doc) => AtomicFile.WriteAllText(path, MarkdownReport.Render(doc));
 }

@@ -1,5 +1,6 @@
 // One card (line) of an IEEE Common Format file, read by the fixed columns the format defines.
 using System.Globalization;
+using Study.Core.Model;
 
 namespace Study.Core.Io.CommonFormat;
 

@@ -1,5 +1,6 @@
 // Splits an IEEE Common Format file into its title, bus and branch cards; other sections are skipped.
 using System.Text.RegularExpressions;
+using Study.Core.Model;
 
 namespace Study.Core.Io.CommonFormat;
 

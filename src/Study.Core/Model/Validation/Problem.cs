@@ -44,3 +44,10 @@ public sealed record Problem(
         return $"{element}{field}: ";
     }
 }
+
+/// <summary>An error makes the network unusable for a study; a warning is data worth a second look.</summary>
+public enum Severity
+{
+    Error,
+    Warning,
+}

@@ -1,0 +1,69 @@
+// `study compare BEFORE AFTER` or `study compare FILE --scenarios A,B`: bus voltages, branch flows and losses side by side.
+using Study.App.Cli.Files;
+using Study.App.Cli.Reports;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+using Study.Core.Studies;
+
+namespace Study.App.Cli.Compare;
+
+public sealed class CompareCommand : Command
+{
+    public override string Name => "compare";
+    public override string Summary => "compare two networks (before and after a change) or two scenarios: voltages, flows, losses, violations";
+    public override string Usage =>
+        "study compare BEFORE AFTER [--scenario NAME] | FILE --scenarios A,B  [--json] [--csv DIR] [--markdown FILE]";
+    public override IReadOnlyList<string> OptionHelp =>
+    [
+        "BEFORE AFTER       two network files, solved alike and matched bus by bus and branch by branch by id",
+        "--scenario NAME    solve both networks in this scenario (default: loads as entered)",
+        "--scenarios A,B    with one FILE: compare its scenario A (before) with its scenario B (after)",
+        "--json             machine-readable result",
+        "--csv DIR          write buses.csv, branches.csv, violations.csv and totals.csv into DIR",
+        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
+    ];
+    protected override IEnumerable<string> ValueOptions => ["scenario", "scenarios", "csv", "markdown"];
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string beforePath = args.Positional(0, "BEFORE (a network file)");
+        IReadOnlyList<string> pair = args.Values("scenarios");
+        Network before, after;
+        string afterPath;
+        Scenario? beforeScenario, afterScenario;
+        if (args.Value("scenarios") is not null)
+        {
+            args.ExpectPositionals(1);
+            if (args.Value("scenario") is not null) throw new UsageException("give --scenario NAME or --scenarios A,B, not both");
+            if (pair.Count != 2) throw new UsageException("--scenarios needs two scenario names separated by a comma, e.g. winter-peak,summer-night");
+            before = after = NetworkLoading.ReadValid(beforePath, context.Err);
+            afterPath = beforePath;
+            beforeScenario = NetworkLoading.PickScenario(before, pair[0]);
+            afterScenario = NetworkLoading.PickScenario(after, pair[1]);
+        }
+        else
+        {
+            afterPath = args.Positional(1, "AFTER (a network file), or --scenarios A,B to compare two scenarios of one file");
+            args.ExpectPositionals(2);
+            before = NetworkLoading.ReadValid(beforePath, context.Err);
+            after = NetworkLoading.ReadValid(afterPath, context.Err);
+            beforeScenario = NetworkLoading.PickScenario(before, args.Value("scenario"));
+            afterScenario = NetworkLoading.PickScenario(after, args.Value("scenario"));
+        }
+
+        var options = LoadFlowOptions.Default;
+        CaseComparisonResult result = CaseComparison.Run(before, beforeScenario, after, afterScenario, options);
+        var beforeSide = new CompareSide(beforePath, before.Name, beforeScenario?.Name);
+        var afterSide = new CompareSide(afterPath, after.Name, afterScenario?.Name);
+        ReportDocument report = CompareReport.Build(beforeSide, afterSide, result, options);
+        bool converged = result.BeforeConverged && result.AfterConverged;
+        if (converged && args.Value("csv") is string dir) CompareCsv.Write(result, dir);
+        if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
+        if (args.Has("json")) CliJson.Write(context, CompareJson.From(result, beforeSide.Label, afterSide.Label));
+        else context.Out.Write(PlainTextReport.Render(report));
+        if (converged) return ExitCode.Done;
+        if (!result.BeforeConverged) context.Err.WriteLine($"error: {beforePath}: the load flow did not converge: {result.BeforeMessage}");
+        if (!result.AfterConverged) context.Err.WriteLine($"error: {afterPath}: the load flow did not converge: {result.AfterMessage}");
+        return ExitCode.NoConvergence;
+    }
+}

@@ -1,0 +1,100 @@
+// `study fault FILE`: IEC 60909 (or load-flow based) fault levels at every bus, and breaker duty.
+using System.Numerics;
+using Study.App.Cli.Files;
+using Study.App.Cli.Reports;
+using Study.Core.Faults;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+using Study.Core.Units;
+
+namespace Study.App.Cli.Faults;
+
+public sealed class FaultCommand : Command
+{
+    public override string Name => "fault";
+    public override string Summary => "fault levels (I''k, S''k, i_p) at buses and breaker duty, by IEC 60909 or from a solved load flow";
+    public override string Usage =>
+        "study fault FILE [--bus ID ... | --all] [--type 3ph,slg,ll,dlg] [--zf R,X] [--method iec60909|loadflow] [--min] [--scenario NAME] [--json] [--markdown FILE] [--timings]";
+    public override IReadOnlyList<string> OptionHelp =>
+    [
+        "--bus ID ...            fault these buses only (default: every bus)",
+        "--all                   fault every bus (the default)",
+        "--type 3ph,slg,ll,dlg   fault types (default 3ph,slg)",
+        "--zf R,X                fault impedance in ohm (default 0,0: a bolted fault)",
+        "--method NAME           iec60909 (equivalent source c·Un/√3, default) or loadflow (pre-fault voltages from the load flow)",
+        "--min                   minimum levels: c_min and each supply's scMvaMin",
+        "--scenario NAME         scale loads as the named scenario does (matters for --method loadflow)",
+        "--json                  machine-readable result",
+        "--markdown FILE         write the report as Markdown, with the inputs and the caution, to attach to a study note",
+        "--timings               report the time of each stage (read, validate, build, faults, report)",
+    ];
+    protected override IEnumerable<string> ValueOptions => ["bus*", "type*", "zf", "method", "scenario", "markdown"];
+    protected override IEnumerable<string> Flags => ["json", "all", "min", "timings"];
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
+        args.ExpectPositionals(1);
+        IReadOnlyList<string> buses = args.Values("bus");
+        if (buses.Count > 0 && args.Has("all")) throw new UsageException("give --bus or --all, not both");
+        var kinds = new List<FaultKind>();
+        foreach (string code in args.Values("type"))
+        {
+            FaultKind kind = code switch
+            {
+                "3ph" => FaultKind.ThreePhase,
+                "slg" => FaultKind.LineToEarth,
+                "ll" => FaultKind.LineToLine,
+                "dlg" => FaultKind.LineLineToEarth,
+                _ => throw new UsageException($"--type knows 3ph, slg, ll, dlg; got '{code}'"),
+            };
+            if (!kinds.Contains(kind)) kinds.Add(kind);
+        }
+        FaultMethod method = args.Value("method") switch
+        {
+            null or "iec60909" => FaultMethod.Iec60909,
+            "loadflow" => FaultMethod.LoadFlow,
+            string other => throw new UsageException($"--method is iec60909 or loadflow, got '{other}'"),
+        };
+        var zf = args.Pair("zf") is (double r, double x) ? new Complex(r, x) : Complex.Zero;
+        if (zf.Real < 0) throw new UsageException("--zf resistance must not be negative");
+
+        StageClock? clock = args.Has("timings") ? new StageClock() : null;
+        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
+        Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
+        PerUnitModel model = PerUnitModel.Build(network, scenario);
+        clock?.Lap("build");
+        LoadFlowResult? preFault = null;
+        if (method == FaultMethod.LoadFlow)
+        {
+            preFault = LoadFlowSolver.Solve(model, LoadFlowOptions.Default with { IncludeInternalBuses = true });
+            if (!preFault.Converged)
+            {
+                context.Err.WriteLine($"error: {path}: the pre-fault load flow did not converge: {preFault.Message}");
+                return ExitCode.NoConvergence;
+            }
+            clock?.Lap("pre-fault load flow");
+        }
+        var request = new FaultRequest
+        {
+            Buses = buses.Count > 0 ? buses : null,
+            Kinds = kinds.Count > 0 ? kinds : FaultRequest.Default.Kinds,
+            FaultImpedanceOhm = zf,
+            Method = method,
+            Level = args.Has("min") ? FaultLevel.Min : FaultLevel.Max,
+            PreFault = preFault,
+        };
+        FaultResult result = FaultStudy.Run(model, request);
+        clock?.Lap("faults");
+        bool json = args.Has("json");
+        string? markdown = args.Value("markdown");
+        // The readable report is built only when something shows it: --json alone never does.
+        string? text = !json || markdown is not null ? FaultReport.Render(path, network, result, detail: buses.Count > 0) : null;
+        if (markdown is not null)
+            ReportFiles.WriteMarkdown(markdown, FaultMarkdown.Build(path, network, result, request, scenario?.Name, text!));
+        clock?.Lap("report");
+        if (json) CliJson.Write(context, FaultJson.From(result) with { Timings = clock?.ToJson() });
+        else context.Out.Write(text + clock?.Render());
+        return ExitCode.Done;
+    }
+}

@@ -1,0 +1,37 @@
+// `study check FILE`: the validation report of a network, every problem at once.
+using Study.Core.Io;
+using Study.Core.Model;
+using Study.Core.Model.Validation;
+
+namespace Study.App.Cli.Files;
+
+public sealed class CheckCommand : Command
+{
+    public override string Name => "check";
+    public override string Summary => "validate a network file or imported case and list every problem";
+    public override string Usage => "study check FILE [--json]";
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
+        args.ExpectPositionals(1);
+        Network network = NetworkFile.Read(path);
+        ValidationReport report = NetworkValidator.Validate(network);
+        if (args.Has("json"))
+            CliJson.Write(context, CheckJson.From(path, report));
+        else
+            WriteReport(context.Out, path, network, report);
+        return report.HasErrors ? ExitCode.InputError : ExitCode.Done;
+    }
+
+    private static void WriteReport(TextWriter output, string path, Network network, ValidationReport report)
+    {
+        output.WriteLine($"{path}: {NetworkSummary.Describe(network)}");
+        foreach (Problem problem in report.Problems) output.WriteLine("  " + problem.Describe());
+        int errors = report.Problems.Count(p => p.Severity == Severity.Error);
+        int warnings = report.Problems.Count - errors;
+        output.WriteLine(errors == 0 && warnings == 0
+            ? "clean: no errors, no warnings"
+            : $"{errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
+    }
+}

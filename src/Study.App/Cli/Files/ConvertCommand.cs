@@ -1,0 +1,26 @@
+// `study convert IN OUT`: any readable network (network file or IEEE Common Format) to a network file.
+using Study.Core.Io;
+using Study.Core.Model;
+
+namespace Study.App.Cli.Files;
+
+public sealed class ConvertCommand : Command
+{
+    public override string Name => "convert";
+    public override string Summary => "convert an IEEE Common Format case (or a network file) to a network file";
+    public override string Usage => "study convert IN OUT";
+    protected override IEnumerable<string> Flags => [];
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string input = args.Positional(0, "IN (the file to convert)");
+        string output = args.Positional(1, "OUT (the network file to write, e.g. case.study.json)");
+        args.ExpectPositionals(2);
+        if (Path.GetFullPath(input) == Path.GetFullPath(output))
+            throw new UsageException("IN and OUT are the same file: choose another OUT so the original is kept");
+        Network network = NetworkFile.Read(input);
+        NetworkFile.Write(network, output);
+        context.Out.WriteLine($"wrote {output}: {NetworkSummary.Describe(network)}");
+        return ExitCode.Done;
+    }
+}

@@ -1,0 +1,60 @@
+// `study outages FILE`: N-1 screening — each line and transformer out in turn, ranked by severity.
+using Study.App.Cli.Files;
+using Study.App.Cli.Reports;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+using Study.Core.Studies;
+
+namespace Study.App.Cli.Outages;
+
+public sealed class OutagesCommand : Command
+{
+    public override string Name => "outages";
+    public override string Summary => "take each line and transformer out in turn and rank the outages by what they break";
+    public override string Usage =>
+        "study outages FILE [--scenario NAME | --all-scenarios] [--elements ID ...] [--json] [--csv DIR] [--markdown FILE]";
+    public override IReadOnlyList<string> OptionHelp =>
+    [
+        "--scenario NAME    one scenario; --all-scenarios (the default when the network has scenarios) screens each",
+        "--elements ID ...  take out only these lines and transformers (default: every one in service)",
+        "--json             machine-readable result (an array of scenarios when there are several)",
+        "--csv DIR          write outages.csv and new-violations.csv into DIR",
+        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
+    ];
+    protected override IEnumerable<string> ValueOptions => ["scenario", "elements*", "csv", "markdown"];
+    protected override IEnumerable<string> Flags => ["json", "all-scenarios"];
+
+    protected override int Execute(Arguments args, CommandContext context)
+    {
+        string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
+        args.ExpectPositionals(1);
+        if (args.Has("all-scenarios") && args.Value("scenario") is not null)
+            throw new UsageException("give --scenario NAME or --all-scenarios, not both");
+
+        Network network = NetworkLoading.ReadValid(path, context.Err);
+        IReadOnlyList<Scenario> scenarios = args.Value("scenario") is string name
+            ? [NetworkLoading.PickScenario(network, name)!]
+            : network.Scenarios;
+        var request = new OutageScreeningRequest { ElementIds = args.Values("elements"), Scenarios = scenarios };
+        var options = LoadFlowOptions.Default;
+        OutageScreeningResult result;
+        using (TerminalProgress? progress = TerminalProgress.ForTerminal(context.Err, "outages"))
+            result = OutageScreening.Run(network, request, options, progress);
+
+        if (args.Value("csv") is string dir) OutageCsv.Write(result, dir);
+        ReportDocument report = OutageReport.Build(path, network, result, options);
+        if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
+        if (args.Has("json"))
+        {
+            var json = result.Scenarios.Select(OutagesJson.From).ToList();
+            if (json.Count == 1) CliJson.Write(context, json[0]);
+            else CliJson.Write(context, json);
+        }
+        else context.Out.Write(PlainTextReport.Render(report));
+
+        var failed = result.Scenarios.Where(s => !s.IntactConverged).ToList();
+        foreach (ScenarioScreening s in failed)
+            context.Err.WriteLine($"error: {path}: the intact case ({s.Scenario ?? "loads as entered"}) did not converge: {s.IntactMessage}");
+        return failed.Count > 0 ? ExitCode.NoConvergence : ExitCode.Done;
+    }
+}

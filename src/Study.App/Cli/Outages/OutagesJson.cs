@@ -1,0 +1,45 @@
+// The --json shape of `study outages` (DESIGN.md, JSON result shapes): one object per scenario.
+using System.Text.Json.Serialization;
+using Study.App.Cli.Solve;
+using Study.Core.Studies;
+
+namespace Study.App.Cli.Outages;
+
+/// <summary>A new violation: the element, its kind ("bus" or the branch kind), the limit broken ("low", "high", "overload").</summary>
+public sealed record OutageViolationJson(string Element, string Kind, string? Type, double Value, double Limit, double? IntactValue);
+
+public sealed record ParallelLoadingJson(string Element, double? LoadingPercent);
+
+public sealed record OutageJson(string Element, string Kind, bool Converged, IReadOnlyList<string> IslandedBuses, double LostLoadMw,
+    IReadOnlyList<OutageViolationJson> NewViolations, double? WorstVPu, double? WorstLoadingPercent, double Severity)
+{
+    public string? WorstVBus { get; init; }
+    public string? WorstLoadingElement { get; init; }
+    /// <summary>Branches left between the same two buses (for a bank: the remaining bank) and their loading.</summary>
+    public IReadOnlyList<ParallelLoadingJson> ParallelLoadings { get; init; } = [];
+    public double LostGenerationMw { get; init; }
+
+    /// <summary>Only when the load flow did not converge with the element out: why.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public string? Message { get; init; }
+}
+
+public sealed record OutagesJson(string? Scenario, IReadOnlyList<OutageJson> Outages)
+{
+    /// <summary>Only when the intact case itself did not converge (nothing to judge the outages against).</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public string? IntactMessage { get; init; }
+
+    public static OutagesJson From(ScenarioScreening s) => new(s.Scenario, s.Outages.Select(o =>
+        new OutageJson(o.Element, o.Kind, o.Converged, o.IslandedBuses, o.LostLoadMw,
+            o.NewViolations.Select(v => new OutageViolationJson(v.Element, v.Kind, SolveJson.ViolationName(v.Type), v.Value, v.Limit, v.IntactValue)).ToList(),
+            o.WorstVPu, o.WorstLoadingPercent, o.Severity)
+        {
+            WorstVBus = o.WorstVBus, WorstLoadingElement = o.WorstLoadingElement, Message = o.Message,
+            ParallelLoadings = o.ParallelLoadings.Select(p => new ParallelLoadingJson(p.Element, p.LoadingPercent)).ToList(),
+            LostGenerationMw = o.LostGenerationMw,
+        }).ToList())
+    {
+        IntactMessage = s.IntactConverged ? null : s.IntactMessage ?? "the intact case did not converge",
+    };
+}

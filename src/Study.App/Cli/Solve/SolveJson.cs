@@ -1,0 +1,65 @@
+// The --json shape of `study solve` (DESIGN.md, JSON result shapes).
+using Study.Core.LoadFlow;
+
+namespace Study.App.Cli.Solve;
+
+public sealed record SolveBusJson(string Id, double? Kv, double VPu, double? VKv, double AngleDeg,
+    double PGenMw, double QGenMvar, double PLoadMw, double QLoadMvar, string? Violation);
+
+public sealed record SolveBranchJson(string Id, string Kind, string From, string To, double PFromMw, double QFromMvar,
+    double PToMw, double QToMvar, double? IFromA, double LossMw, double LossMvar, double? LoadingPercent);
+
+public sealed record SolveTapJson(string Id, int Position, string? AtLimit);
+
+public sealed record SolveTotalsJson(double GenerationMw, double GenerationMvar, double LoadMw, double LoadMvar,
+    double LossMw, double LossMvar);
+
+public sealed record PublishedJson(string Source, double MaxVoltageDifferencePu, string? MaxVoltageBus,
+    double MaxAngleDifferenceDeg, string? MaxAngleBus);
+
+public sealed record SolveJson(bool Converged, int Iterations, double MaxMismatchPu,
+    IReadOnlyList<SolveBusJson> Buses, IReadOnlyList<SolveBranchJson> Branches, IReadOnlyList<SolveTapJson> Taps,
+    SolveTotalsJson? Totals)
+{
+    /// <summary>Only when not converged: why, and the bus to look at.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public string? Message { get; init; }
+
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public string? WorstBus { get; init; }
+
+    /// <summary>Only for imported cases: the largest difference from the solution published with the case.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public PublishedJson? Published { get; init; }
+
+    /// <summary>Only with --timings: the time of each stage of the command.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public TimingsJson? Timings { get; init; }
+
+    public static string? ViolationName(ViolationKind kind) => kind switch
+    {
+        ViolationKind.Low => "low",
+        ViolationKind.High => "high",
+        ViolationKind.Overload => "overload",
+        _ => null,
+    };
+
+    public static SolveJson From(LoadFlowResult r, PublishedComparison? published)
+    {
+        var t = r.Totals;
+        return new SolveJson(
+            r.Converged, r.Iterations, r.MaxMismatchPu,
+            r.Buses.Select(b => new SolveBusJson(b.Id, b.Kv > 0 ? b.Kv : null, b.VPu, b.VKv, b.AngleDeg,
+                b.PGenMw, b.QGenMvar, b.PLoadMw, b.QLoadMvar, ViolationName(b.Violation))).ToList(),
+            r.Branches.Select(b => new SolveBranchJson(b.Id, b.Kind, b.From, b.To, b.PFromMw, b.QFromMvar,
+                b.PToMw, b.QToMvar, b.IFromA, b.LossMw, b.LossMvar, b.LoadingPercent)).ToList(),
+            r.Taps.Select(x => new SolveTapJson(x.Id, x.Position, x.AtLimit)).ToList(),
+            r.Converged ? new SolveTotalsJson(t.GenerationMw, t.GenerationMvar, t.LoadMw, t.LoadMvar, t.LossMw, t.LossMvar) : null)
+        {
+            Message = r.Converged ? null : r.Message,
+            WorstBus = r.Converged ? null : r.WorstBus,
+            Published = published is null ? null : new PublishedJson(published.Source, published.MaxVoltageDifferencePu,
+                published.MaxVoltageBus, published.MaxAngleDifferenceDeg, published.MaxAngleBus),
+        };
+    }
+}

@@ -1,0 +1,83 @@
+// One editable field of an element: label, unit, default, and how to read and write it as text.
+using System.Globalization;
+
+namespace Study.App.Tui.Editing;
+
+/// <summary>
+/// A field of an element record as the forms and tables show it. <see cref="Write"/> returns a new
+/// record with the field set from text, or throws <see cref="FormatException"/> with a message for the user.
+/// </summary>
+public sealed record ElementField(
+    string Name,
+    string Unit,
+    string DefaultText,
+    Func<object, string> Read,
+    Func<object, string, object> Write)
+{
+    /// <summary>"Name unit", as used for labels and table headers.</summary>
+    public string Header => Unit.Length > 0 ? $"{Name} {Unit}" : Name;
+}
+
+/// <summary>Builders for typed fields; empty text means "not given" for optional values.</summary>
+public static class Field
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public static string Format(double value) => value.ToString("0.######", Inv);
+
+    public static ElementField Id<T>(string name, Func<T, string> get, Func<T, string, T> set) =>
+        new(name, "", "", e => get((T)e), (e, text) =>
+        {
+            string id = text.Trim();
+            if (id.Length == 0) throw new FormatException($"{name} is required");
+            return set((T)e, id)!;
+        });
+
+    public static ElementField Text<T>(string name, Func<T, string?> get, Func<T, string?, T> set) =>
+        new(name, "", "", e => get((T)e) ?? "", (e, text) => set((T)e, text.Trim().Length == 0 ? null : text.Trim())!);
+
+    public static ElementField Number<T>(string name, string unit, double defaultValue, Func<T, double> get, Func<T, double, T> set) =>
+        new(name, unit, Format(defaultValue), e => Format(get((T)e)), (e, text) =>
+            set((T)e, text.Trim().Length == 0 ? defaultValue : Parse(name, text))!);
+
+    public static ElementField Optional<T>(string name, string unit, string defaultText, Func<T, double?> get, Func<T, double?, T> set) =>
+        new(name, unit, defaultText, e => get((T)e) is double v ? Format(v) : "", (e, text) =>
+            set((T)e, text.Trim().Length == 0 ? null : Parse(name, text))!);
+
+    public static ElementField Integer<T>(string name, string unit, int defaultValue, Func<T, int> get, Func<T, int, T> set) =>
+        new(name, unit, defaultValue.ToString(Inv), e => get((T)e).ToString(Inv), (e, text) =>
+        {
+            if (text.Trim().Length == 0) return set((T)e, defaultValue)!;
+            if (!int.TryParse(text.Trim(), NumberStyles.Integer, Inv, out int v)) throw new FormatException($"{name}: '{text.Trim()}' is not a whole number");
+            return set((T)e, v)!;
+        });
+
+    public static ElementField Flag<T>(string name, bool defaultValue, Func<T, bool> get, Func<T, bool, T> set) =>
+        new(name, "", defaultValue ? "yes" : "no", e => get((T)e) ? "yes" : "no", (e, text) =>
+            set((T)e, text.Trim().ToLowerInvariant() switch
+            {
+                "" => defaultValue,
+                "yes" or "y" or "true" or "1" => true,
+                "no" or "n" or "false" or "0" => false,
+                _ => throw new FormatException($"{name}: answer yes or no"),
+            })!);
+
+    /// <summary>A choice among enum values, written in the file's lower-case spelling.</summary>
+    public static ElementField Choice<T, TEnum>(string name, TEnum defaultValue, Func<T, TEnum> get, Func<T, TEnum, T> set)
+        where TEnum : struct, Enum =>
+        new(name, string.Join("/", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant())), defaultValue.ToString().ToLowerInvariant(),
+            e => get((T)e).ToString().ToLowerInvariant(), (e, text) =>
+            {
+                if (text.Trim().Length == 0) return set((T)e, defaultValue)!;
+                if (!Enum.TryParse(text.Trim(), ignoreCase: true, out TEnum v) || !Enum.IsDefined(v))
+                    throw new FormatException($"{name}: one of {string.Join(", ", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant()))}");
+                return set((T)e, v)!;
+            });
+
+    private static double Parse(string name, string text)
+    {
+        if (!double.TryParse(text.Trim(), NumberStyles.Float, Inv, out double v) || !double.IsFinite(v))
+            throw new FormatException($"{name}: '{text.Trim()}' is not a number");
+        return v;
+    }
+}

@@ -1,0 +1,80 @@
+// The state behind an element's edit form: field texts, the element they make, its problems and per-unit preview.
+using Study.Core.Model;
+using Study.Core.Model.Validation;
+
+namespace Study.App.Tui.Editing;
+
+/// <summary>What the current field texts amount to.</summary>
+public sealed record FormState(object? Element, IReadOnlyList<string> Problems, IReadOnlyList<string> Preview)
+{
+    /// <summary>True when the texts make an element (numbers parse, id free); validator findings do not block.</summary>
+    public bool CanAccept => Element is not null;
+}
+
+/// <summary>
+/// Edits one element as text fields. Each evaluation builds the element from all texts, places it in
+/// a copy of the network and asks the same validator as <c>study check</c> about that element.
+/// </summary>
+public sealed class ElementForm
+{
+    private readonly Network network;
+    private readonly object start;
+
+    /// <summary>Edits <paramref name="originalId"/>, or adds a new element when it is null.</summary>
+    public ElementForm(Network network, ElementKind kind, string? originalId)
+    {
+        this.network = network;
+        Kind = kind;
+        OriginalId = originalId;
+        start = originalId is null
+            ? ElementFields.New(network, kind)
+            : ElementLists.Find(network, kind, originalId) ?? throw new ArgumentException($"no {ElementKinds.Label(kind)} '{originalId}'");
+        Fields = ElementFields.For(kind);
+        Texts = Fields.Select(f => f.Read(start)).ToArray();
+    }
+
+    public ElementKind Kind { get; }
+    public string? OriginalId { get; }
+    public IReadOnlyList<ElementField> Fields { get; }
+
+    /// <summary>The text of each field, in the order of <see cref="Fields"/>; the form writes into it.</summary>
+    public string[] Texts { get; }
+
+    public string Title => OriginalId is null
+        ? $"Add {ElementKinds.Label(Kind)}"
+        : $"Edit {ElementKinds.Label(Kind)} {OriginalId}";
+
+    public FormState Evaluate()
+    {
+        var problems = new List<string>();
+        object element = start;
+        for (int i = 0; i < Fields.Count; i++)
+        {
+            try
+            {
+                element = Fields[i].Write(element, Texts[i]);
+            }
+            catch (FormatException e)
+            {
+                problems.Add("error: " + e.Message);
+            }
+        }
+        if (problems.Count > 0) return new FormState(null, problems, []);
+
+        string id = ElementLists.Of(Kind).IdOf(element);
+        if (!ElementLists.IsIdFree(network, Kind, id, except: OriginalId))
+            return new FormState(null, [$"error: id '{id}' is already used in this family of elements"], []);
+
+        Network candidate = OriginalId is null
+            ? ElementLists.Add(network, Kind, element)
+            : ElementLists.Replace(network, Kind, OriginalId, element);
+        if (Kind == ElementKind.Bus && OriginalId is not null && id != OriginalId)
+            candidate = BusReferences.Rename(candidate, OriginalId, id);
+        foreach (Problem p in NetworkValidator.ValidateElement(candidate, Kind, id))
+        {
+            string severity = p.Severity == Severity.Error ? "error" : "warning";
+            problems.Add(p.Field is null ? $"{severity}: {p.Message}" : $"{severity}: {p.Field}: {p.Message}");
+        }
+        return new FormState(element, problems, PerUnitPreview.Lines(candidate, Kind, id));
+    }
+}

@@ -1,0 +1,43 @@
+// What the fault dialog asks: fault kinds, method, level and where, and the engine request they make.
+using Study.Core.Faults;
+using Study.Core.Units;
+
+namespace Study.App.Tui.Faults;
+
+/// <summary>The fault question before it is asked; defaults are the engine's (IEC 60909 maximum, 3ph and slg).</summary>
+public sealed class FaultForm(string? selectedBus)
+{
+    public static IReadOnlyList<FaultKind> AllKinds { get; } =
+        [FaultKind.ThreePhase, FaultKind.LineToEarth, FaultKind.LineToLine, FaultKind.LineLineToEarth];
+
+    public HashSet<FaultKind> Kinds { get; } = [.. FaultRequest.Default.Kinds];
+    public FaultMethod Method { get; set; } = FaultRequest.Default.Method;
+    public FaultLevel Level { get; set; } = FaultRequest.Default.Level;
+
+    /// <summary>The bus under the cursor when the dialog opened; null when no bus is selected.</summary>
+    public string? SelectedBus { get; } = selectedBus;
+
+    /// <summary>True: every bus; false: <see cref="SelectedBus"/> only. Defaults to the selected bus when there is one.</summary>
+    public bool AllBuses { get; set; } = selectedBus is null;
+
+    public static string KindLabel(FaultKind kind) => kind switch
+    {
+        FaultKind.ThreePhase => "3ph  three-phase",
+        FaultKind.LineToEarth => "slg  line to earth",
+        FaultKind.LineToLine => "ll   line to line",
+        _ => "dlg  two lines to earth",
+    };
+
+    public (FaultRequest? Request, string? Error) Build()
+    {
+        if (Kinds.Count == 0) return (null, "choose at least one fault kind");
+        if (!AllBuses && SelectedBus is null) return (null, "no bus is selected: choose all buses, or select a bus in the Buses list first");
+        return (new FaultRequest
+        {
+            Kinds = AllKinds.Where(Kinds.Contains).ToList(),
+            Method = Method,
+            Level = Level,
+            Buses = AllBuses ? null : [SelectedBus!],
+        }, null);
+    }
+}

@@ -1,0 +1,206 @@
+// What each command does on the main screen: edits through the session, studies through the runner.
+using Study.App.Tui.Editing;
+using Study.App.Tui.LoadFlow;
+using Study.Core.LoadFlow;
+using Study.Core.Model;
+using Terminal.Gui.App;
+using Terminal.Gui.Input;
+
+namespace Study.App.Tui.Shell;
+
+/// <summary>Runs a <see cref="TuiAction"/>. Keys arrive through <see cref="OnKeyDown"/>, the one key handler.</summary>
+public sealed class MainCommands(MainWindow main)
+{
+    private IApplication App => main.App;
+    private EditSession Session => main.Session;
+    private StudyCommands Studies { get; } = new(main);
+
+    /// <summary>The application-wide key handler: commands only while the main window is on top.</summary>
+    public void OnKeyDown(object? sender, Key key)
+    {
+        if (App.TopRunnableView != main) return;
+        if (key == Key.Esc)
+        {
+            key.Handled = true; // Esc must not close the main window; it stops a running study.
+            if (main.Runner.IsRunning) main.Runner.Cancel();
+            return;
+        }
+        if (key == Key.Tab || key == Key.Tab.WithShift)
+        {
+            key.Handled = true;
+            main.FocusNextPane(back: key == Key.Tab.WithShift);
+            return;
+        }
+        if (TuiCommands.ForKey(key) is { } command)
+        {
+            key.Handled = true;
+            Do(command.Action);
+        }
+    }
+
+    /// <summary>Runs the action on the next loop iteration (from menus, which are closing).</summary>
+    public void Later(TuiAction action) => App.Invoke(() => Do(action));
+
+    public void Do(TuiAction action)
+    {
+        switch (action)
+        {
+            case TuiAction.Open: Open(); break;
+            case TuiAction.Save: Save(); break;
+            case TuiAction.SaveAs: SaveAs(); break;
+            case TuiAction.Quit: Quit(); break;
+            case TuiAction.Add: Edit(null); break;
+            case TuiAction.Edit: if (main.SelectedId is { } id) Edit(id); break;
+            case TuiAction.Delete: Delete(); break;
+            case TuiAction.Duplicate: Duplicate(); break;
+            case TuiAction.Undo: Session.Undo(); break;
+            case TuiAction.Redo: Session.Redo(); break;
+            case TuiAction.LoadFlow: LoadFlow(); break;
+            case TuiAction.Fault: Studies.Fault(); break;
+            case TuiAction.TapStudy: Studies.TapStudy(); break;
+            case TuiAction.ApplyTap: Studies.ApplyRecommendedTap(); break;
+            case TuiAction.Outages: Studies.Outages(); break;
+            case TuiAction.Scenario: ChooseScenario(); break;
+            case TuiAction.Cancel: main.Runner.Cancel(); break;
+            case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
+            case TuiAction.ShowBuses: main.Results.Value = main.Results.BusesTab; break;
+            case TuiAction.ShowBranches: main.Results.Value = main.Results.BranchesTab; break;
+            case TuiAction.ShowFaults: main.Results.Value = main.Results.FaultsTab; break;
+            case TuiAction.ShowTapStudy: main.Results.Value = main.Results.TapStudyTab; break;
+            case TuiAction.ShowOutages: main.Results.Value = main.Results.OutagesTab; break;
+            case TuiAction.ShowOneLine: main.Results.Value = main.Results.OneLineTab; break;
+            case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
+            case TuiAction.ShowVoltageChart: main.Results.Value = main.Results.ChartTab; break;
+            case TuiAction.Help: HelpDialog.Run(App); break;
+        }
+    }
+
+    private void Edit(string? id)
+    {
+        ElementKind kind = main.SelectedKind;
+        var form = new ElementForm(Session.Network, kind, id);
+        if (ElementDialog.Run(App, form) is not { } element) return;
+        if (id is null) Session.Add(kind, element);
+        else Session.Replace(kind, id, element);
+        main.Select(kind, ElementLists.Of(kind).IdOf(element));
+    }
+
+    private void Delete()
+    {
+        ElementKind kind = main.SelectedKind;
+        if (main.SelectedId is not { } id) return;
+        IReadOnlyList<ElementReference> refs = Session.ReferencesTo(kind, id);
+        if (refs.Count == 0)
+        {
+            if (Prompts.Ask(App, "Delete", $"Delete {ElementKinds.Label(kind)} {id}?", "Cancel", "Delete") == 1)
+                Session.Delete(kind, id);
+            return;
+        }
+        string list = string.Join("\n", refs.Take(12).Select(r => "  " + r)) + (refs.Count > 12 ? $"\n  … and {refs.Count - 12} more" : "");
+        int? answer = Prompts.Ask(App, "Bus in use",
+            $"Bus {id} is named by {refs.Count} element(s):\n{list}\n\nDelete the bus with the elements connected to it?",
+            "Cancel", "Delete all");
+        if (answer == 1) Session.Delete(kind, id, cascade: true);
+    }
+
+    private void Duplicate()
+    {
+        if (main.SelectedId is not { } id) return;
+        string copy = Session.Duplicate(main.SelectedKind, id);
+        main.Select(main.SelectedKind, copy);
+    }
+
+    private void LoadFlow()
+    {
+        Network snapshot = Session.Network;
+        string? scenario = Session.ActiveScenario;
+        LoadFlowResult? warm = main.LastResult is { Converged: true } last && last.Scenario == scenario ? last : null;
+        main.Runner.Start("Load flow", cancel => LoadFlowCall.Solve(snapshot, scenario, warm, cancel),
+            result =>
+            {
+                main.ShowResult(result);
+                main.Results.Value = main.Results.BusesTab;
+            },
+            message =>
+            {
+                main.Status.Summary = message;
+                Prompts.Tell(App, "Load flow", message);
+            });
+    }
+
+    private void ChooseScenario()
+    {
+        var names = new List<string> { "(network as entered)" };
+        names.AddRange(Session.Network.Scenarios.Select(s => $"{s.Name}  load ×{Field.Format(s.LoadScale)}"));
+        int current = Session.ActiveScenario is null ? 0
+            : 1 + Session.Network.Scenarios.ToList().FindIndex(s => s.Name == Session.ActiveScenario);
+        if (Prompts.Choose(App, "Scenario", names, current) is not int chosen) return;
+        Session.ActiveScenario = chosen == 0 ? null : Session.Network.Scenarios[chosen - 1].Name;
+        main.Refresh();
+    }
+
+    private void Open()
+    {
+        if (!SaveOrDiscardFirst()) return;
+        if (Prompts.AskPath(App, "Open network", Session.Path ?? Directory.GetCurrentDirectory() + "/") is not { } path) return;
+        try
+        {
+            EditSession next = EditSession.Open(path);
+            Session.Close();
+            main.UseSession(next);
+            StudyTui.OfferRecovery(App, next);
+        }
+        catch (InputException e)
+        {
+            Prompts.Tell(App, "Cannot open", e.Describe());
+        }
+    }
+
+    /// <summary>True when saved (or nothing to save).</summary>
+    private bool Save()
+    {
+        if (Session.NeedsPathToSave) return SaveAs();
+        return Try(Session.Save);
+    }
+
+    private bool SaveAs()
+    {
+        if (Prompts.AskPath(App, "Save as", Session.SuggestedSavePath) is not { } path) return false;
+        return Try(() => Session.SaveAs(path));
+    }
+
+    private bool Try(Action write)
+    {
+        try
+        {
+            write();
+            return true;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or InputException)
+        {
+            Prompts.Tell(App, "Not saved", e.Message);
+            return false;
+        }
+    }
+
+    private void Quit()
+    {
+        if (!SaveOrDiscardFirst()) return;
+        main.Runner.Cancel();
+        Session.Close();
+        App.RequestStop();
+    }
+
+    /// <summary>The unsaved-changes guard: Save, Discard or Cancel. True when it is fine to go on.</summary>
+    private bool SaveOrDiscardFirst()
+    {
+        if (!Session.Dirty) return true;
+        int? answer = Prompts.Ask(App, "Unsaved changes", "The network has unsaved changes.", "Cancel", "Discard", "Save");
+        return answer switch
+        {
+            2 => Save(),
+            1 => true,
+            _ => false,
+        };
+    }
+}

@@ -1,0 +1,98 @@
+// Draws the tap-study curve: watched voltage against tap position per scenario, with the band as lines.
+using System.Text;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+using Attr = Terminal.Gui.Drawing.Attribute;
+
+namespace Study.App.Tui.Taps;
+
+/// <summary>A GraphView fed from a <see cref="TapCurve"/>; the scale follows the view's size on every draw.</summary>
+public sealed class TapCurveView : GraphView
+{
+    private static readonly ColorName16[] Colours = [ColorName16.BrightYellow, ColorName16.BrightCyan, ColorName16.BrightGreen, ColorName16.BrightMagenta];
+    private TapCurve? curve;
+
+    public TapCurveView()
+    {
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        MarginLeft = 7;
+        MarginBottom = 2;
+        CanFocus = true;
+    }
+
+    public TapCurve? Curve
+    {
+        get => curve;
+        set
+        {
+            curve = value;
+            Rebuild();
+        }
+    }
+
+    protected override bool OnDrawingContent(DrawContext? context)
+    {
+        Scale();
+        return base.OnDrawingContent(context);
+    }
+
+    private void Rebuild()
+    {
+        Series.Clear();
+        Annotations.Clear();
+        if (curve is null)
+        {
+            SetNeedsDraw();
+            return;
+        }
+        Attr normal = GetAttributeForRole(VisualRole.Normal);
+        var band = new Attr(ColorName16.Red, normal.Background);
+        foreach (double v in new[] { curve.BandLowPu, curve.BandHighPu })
+            Annotations.Add(new PathAnnotation
+            {
+                Points = [new System.Drawing.PointF(0, (float)v), new System.Drawing.PointF(curve.XSpan, (float)v)],
+                LineColor = band, LineRune = new Rune('┄'), BeforeSeries = true,
+            });
+        for (int s = 0; s < curve.Series.Count; s++)
+        {
+            TapCurveSeries series = curve.Series[s];
+            var colour = new Attr(Colours[s % Colours.Length], normal.Background);
+            foreach (var line in new[] { series.Lowest, series.Highest })
+            {
+                var points = line.Select(p => new System.Drawing.PointF(p.X, p.Y)).ToList();
+                Annotations.Add(new PathAnnotation { Points = points, LineColor = colour, BeforeSeries = true });
+                Series.Add(new ScatterSeries { Points = points, Fill = new GraphCellToRender(new Rune(series.Glyph), colour) });
+            }
+        }
+        AxisX.LabelGetter = i =>
+        {
+            int position = curve.PositionOf(i.Value);
+            return position < curve.MinPosition || position > curve.MaxPosition ? "" : TapStudyTables.Pos(position);
+        };
+        AxisX.Text = "tap position";
+        AxisY.LabelGetter = i => i.Value.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
+        AxisY.Text = "pu";
+        SetNeedsDraw();
+    }
+
+    /// <summary>Fits the positions across the width and the voltage range into the height.</summary>
+    private void Scale()
+    {
+        if (curve is null) return;
+        int cols = Math.Max(4, Viewport.Width - (int)MarginLeft - 1);
+        int rows = Math.Max(3, Viewport.Height - (int)MarginBottom);
+        float xPerCell = (float)curve.XSpan / cols;
+        float yPerCell = (float)(curve.YHighPu - curve.YLowPu) / rows;
+        CellSize = new System.Drawing.PointF(xPerCell, yPerCell);
+        ScrollOffset = new System.Drawing.PointF(0, (float)curve.YLowPu);
+        int positions = curve.MaxPosition - curve.MinPosition + 1;
+        // A label every few positions so that signed labels (up to 3 characters) do not run together.
+        int every = Math.Max(1, (int)Math.Ceiling(4 * xPerCell));
+        AxisX.Increment = 1;
+        AxisX.ShowLabelsEvery = (uint)(positions <= 1 ? 1 : every);
+        AxisY.Increment = yPerCell * 2;
+        AxisY.ShowLabelsEvery = 1;
+    }
+}
