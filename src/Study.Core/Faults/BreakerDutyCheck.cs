@@ -1,5 +1,5 @@
 // Breaker duty: the largest fault current and peak a breaker's bus sees, against its ratings.
-using Study.Core.Model;
+using Study.Core.Units;
 
 namespace Study.Core.Faults;
 
@@ -14,7 +14,7 @@ public static class BreakerDutyCheck
     public const double WarningPercent = 90;
     public const double OverPercent = 100;
 
-    public static IReadOnlyList<BreakerDuty> Evaluate(Network network, IReadOnlyList<ShortCircuitLevel> faults)
+    public static IReadOnlyList<BreakerDuty> Evaluate(IReadOnlyList<PuBreaker> breakers, IReadOnlyList<ShortCircuitLevel> faults)
     {
         var worst = new Dictionary<string, (ShortCircuitLevel Ik, double IpPu)>();
         foreach (ShortCircuitLevel f in faults)
@@ -23,15 +23,15 @@ public static class BreakerDutyCheck
             else worst[f.Bus] = (f.IkPu > w.Ik.IkPu ? f : w.Ik, Math.Max(w.IpPu, f.IpPu));
         }
         var duties = new List<BreakerDuty>();
-        foreach (Breaker breaker in network.Breakers)
+        foreach (PuBreaker breaker in breakers)
         {
-            if (!breaker.InService || !worst.TryGetValue(breaker.Bus, out var w)) continue;
+            if (!worst.TryGetValue(breaker.BusId, out var w)) continue;
             ShortCircuitLevel f = w.Ik;
             double? ipKa = f.Kv > 0 ? w.IpPu * (f.IpKa / f.IpPu ?? 0) : null;
             if (f.IpPu == 0) ipKa = f.Kv > 0 ? 0 : null;
             var duty = new BreakerDuty
             {
-                Id = breaker.Id, Bus = breaker.Bus, IkKa = f.IkKa, IpKa = ipKa, GoverningKind = f.Kind,
+                Id = breaker.Id, Bus = breaker.BusId, IkKa = f.IkKa, IpKa = ipKa, GoverningKind = f.Kind,
                 InterruptingKa = breaker.InterruptingKa > 0 ? breaker.InterruptingKa : null,
                 PeakKa = breaker.PeakKa > 0 ? breaker.PeakKa : null,
             };

@@ -54,8 +54,8 @@ public static class FaultStudy
         return new FaultResult
         {
             Method = request.Method, Level = request.Level, Faults = faults,
-            Breakers = BreakerDutyCheck.Evaluate(model.Network, faults),
-            Notes = notes.Distinct().ToList(), PerUnitOnly = model.Network.IsPerUnitOnly,
+            Breakers = BreakerDutyCheck.Evaluate(model.Breakers, faults),
+            Notes = notes.Distinct().ToList(), PerUnitOnly = model.PerUnitOnly,
         };
     }
 
@@ -71,7 +71,7 @@ public static class FaultStudy
         {
             if (!model.BusIndex.TryGetValue(id, out int i) || model.Buses[i].IsInternal)
             {
-                bool outOfService = model.Network.FindBus(id) is { InService: false };
+                bool outOfService = model.OutOfServiceBuses.Contains(id);
                 throw new InputException(outOfService ? $"bus {id} is out of service" : $"bus {id} not found", elementId: id);
             }
             if (!selected.Contains(i)) selected.Add(i);

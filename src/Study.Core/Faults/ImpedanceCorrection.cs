@@ -1,5 +1,4 @@
 // IEC 60909-0 impedance correction factors for network transformers (K_T) and generators (K_G).
-using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.Faults;
@@ -20,12 +19,8 @@ public static class ImpedanceCorrection
     public static double NetworkTransformer(double xT, double cMax) => 0.95 * cMax / (1 + 0.6 * xT);
 
     /// <summary>K_T of a two-winding bank, or null when its rating is unknown (per-unit form): then no correction.</summary>
-    public static double? TwoWinding(Transformer t, double lvBusKv)
-    {
-        if (t.ZPercent is not double z || t.Xr is not double xr) return null;
-        double xT = z / 100.0 * xr / Math.Sqrt(1 + xr * xr);
-        return NetworkTransformer(xT, SupplyImpedance.CMax(lvBusKv));
-    }
+    public static double? TwoWinding(TransformerRating? rating, double lvBusKv) =>
+        rating is null ? null : NetworkTransformer(rating.XPu, SupplyImpedance.CMax(lvBusKv));
 
     /// <summary>
     /// Scale of each star branch after correcting the pairwise impedances: K_HM, K_HL, K_ML from each
@@ -33,16 +28,16 @@ public static class ImpedanceCorrection
     /// formulas (IEC 60909-0 §6.3.3 for three-winding transformers, from memory). All pairs share one
     /// X/R, so each scale is real.
     /// </summary>
-    public static (double Hv, double Mv, double Lv) ThreeWinding(ThreeWindingTransformer t, double mvBusKv, double lvBusKv)
+    public static (double Hv, double Mv, double Lv) ThreeWinding(ThreeWindingRating t)
     {
-        double sinX = t.Xr / Math.Sqrt(1 + t.Xr * t.Xr);
+        double sinX = t.XOverR / Math.Sqrt(1 + t.XOverR * t.XOverR);
         double Pair(double zPercent, double mvaA, double mvaB, double cMax)
         {
             double rated = Math.Min(mvaA, mvaB);
             double xOwn = zPercent / 100.0 * sinX * (rated > 0 ? rated / t.ZBaseMva : 1.0);
             return NetworkTransformer(xOwn, cMax);
         }
-        double cMv = SupplyImpedance.CMax(mvBusKv), cLv = SupplyImpedance.CMax(lvBusKv);
+        double cMv = SupplyImpedance.CMax(t.MvBusKv), cLv = SupplyImpedance.CMax(t.LvBusKv);
         double kHm = Pair(t.ZHmPercent, t.MvaHv, t.MvaMv, cMv);
         double kHl = Pair(t.ZHlPercent, t.MvaHv, t.MvaLv, cLv);
         double kMl = Pair(t.ZMlPercent, t.MvaMv, t.MvaLv, cLv);
@@ -55,7 +50,7 @@ public static class ImpedanceCorrection
     }
 
     /// <summary>K_G; <paramref name="powerFactorAssumed"/> says the 0.85 default was taken.</summary>
-    public static double Generator(Generator g, double busKv, out bool powerFactorAssumed)
+    public static double Generator(GeneratorRating g, double busKv, out bool powerFactorAssumed)
     {
         powerFactorAssumed = g.PowerFactor is not (> 0 and <= 1);
         double pf = powerFactorAssumed ? DefaultPowerFactor : g.PowerFactor!.Value;

@@ -23,9 +23,6 @@ internal sealed class SequenceBranches
     /// <param name="zeroRequired">True for an earth-fault study: missing zero-sequence data is an input error.</param>
     public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes)
     {
-        Network network = model.Network;
-        var transformers = network.Transformers.Where(t => t.InService).ToDictionary(t => t.Id);
-        var threeWinding = network.ThreeWindingTransformers.Where(t => t.InService).ToDictionary(t => t.Id);
         var kThree = new Dictionary<string, (double Hv, double Mv, double Lv)>();
         bool iec = method == FaultMethod.Iec60909;
         int m = model.Branches.Count;
@@ -35,7 +32,6 @@ internal sealed class SequenceBranches
         var lag = new int[m];
         var zero = new ZeroSequencePath[m];
         InputException? zeroProblem = null;
-        var groups = new Dictionary<string, VectorGroup?>();
 
         for (int k = 0; k < m; k++)
         {
@@ -44,27 +40,26 @@ internal sealed class SequenceBranches
             double ratio = iec && b.Tap is int tap ? model.Taps[tap].RatioAt(model.Taps[tap].Neutral) : b.Ratio;
             double kT = 1.0;
             VectorGroup? group = null;
-            if (b.Kind == BranchKind.Transformer && transformers.TryGetValue(b.Id, out var t))
+            if (b.Kind == BranchKind.Transformer)
             {
                 if (iec)
                 {
-                    double? corrected = ImpedanceCorrection.TwoWinding(t, model.Buses[b.To].BaseKv);
+                    double? corrected = ImpedanceCorrection.TwoWinding(b.Rating, model.Buses[b.To].BaseKv);
                     if (corrected is double value) kT = value;
-                    else notes.Add($"{t.Id}: per-unit data without a rating: K_T not applied");
+                    else notes.Add($"{b.Id}: per-unit data without a rating: K_T not applied");
                 }
-                group = GroupOf(b.Id, t.VectorGroup, false, groups, ref zeroProblem);
+                group = GroupOf(b, threeWinding: false, ref zeroProblem);
                 if (group is not null) lag[k] = group.LvClock;
             }
-            else if (b.Kind == BranchKind.ThreeWindingTransformer && threeWinding.TryGetValue(b.Id, out var t3))
+            else if (b.Kind == BranchKind.ThreeWindingTransformer && b.ThreeWindingRating is { } rating)
             {
-                if (iec && !kThree.ContainsKey(t3.Id))
-                    kThree[t3.Id] = ImpedanceCorrection.ThreeWinding(t3, network.FindBus(t3.Mv)!.Kv, network.FindBus(t3.Lv)!.Kv);
+                if (iec && !kThree.ContainsKey(b.Id)) kThree[b.Id] = ImpedanceCorrection.ThreeWinding(rating);
                 if (iec)
                 {
-                    var s = kThree[t3.Id];
+                    var s = kThree[b.Id];
                     kT = b.Winding == "hv" ? s.Hv : b.Winding == "mv" ? s.Mv : s.Lv;
                 }
-                group = GroupOf(b.Id, t3.VectorGroup, true, groups, ref zeroProblem);
+                group = GroupOf(b, threeWinding: true, ref zeroProblem);
                 // The star point is at the hv reference, so it leads the winding's terminal by that winding's clock.
                 if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
             }
@@ -78,7 +73,7 @@ internal sealed class SequenceBranches
                 MagnetisingY = Faults.EquivalentFrequency.Parallel(b.MagnetisingY, fcOverF),
             };
             if (zeroProblem is null)
-                zero[k] = ZeroPath(model, pos[k], b, kT, group, transformers, threeWinding, notes, ref zeroProblem);
+                zero[k] = ZeroPath(model, pos[k], b, kT, group, notes, ref zeroProblem);
         }
 
         if (zeroProblem is not null && zeroRequired) throw zeroProblem;
@@ -89,25 +84,19 @@ internal sealed class SequenceBranches
         };
     }
 
-    private static VectorGroup? GroupOf(string id, string? text, bool threeWinding, Dictionary<string, VectorGroup?> cache, ref InputException? problem)
+    private static VectorGroup? GroupOf(PuBranch b, bool threeWinding, ref InputException? problem)
     {
-        if (cache.TryGetValue(id, out var known)) return known;
-        VectorGroup? group = null;
-        if (text is null)
+        PuWindings? w = b.Windings;
+        if (w?.GroupText is null)
             problem ??= new InputException(
-                $"transformer {id} has no vector group: an earth-fault study needs it to decide the zero-sequence circuit (e.g. \"vectorGroup\": \"{(threeWinding ? "YNyn0d1" : "Dyn11")}\")",
-                elementId: id);
-        else
-        {
-            try { group = VectorGroup.Parse(text, id, threeWinding); }
-            catch (InputException e) { problem ??= e; }
-        }
-        cache[id] = group;
-        return group;
+                $"transformer {b.Id} has no vector group: an earth-fault study needs it to decide the zero-sequence circuit (e.g. \"vectorGroup\": \"{(threeWinding ? "YNyn0d1" : "Dyn11")}\")",
+                elementId: b.Id);
+        else if (w.Group is null)
+            problem ??= new InputException(w.GroupProblem ?? $"vector group '{w.GroupText}' cannot be read", elementId: b.Id);
+        return w?.Group;
     }
 
     private static ZeroSequencePath ZeroPath(PerUnitModel model, PuBranch corrected, PuBranch b, double kT, VectorGroup? group,
-        Dictionary<string, Transformer> transformers, Dictionary<string, ThreeWindingTransformer> threeWinding,
         List<string> notes, ref InputException? problem)
     {
         switch (b.Kind)
@@ -119,22 +108,22 @@ internal sealed class SequenceBranches
                 return ZeroSequencePath.Open;
             case BranchKind.Transformer when group is not null:
             {
-                var t = transformers[b.Id];
+                PuWindings w = b.Windings!;
                 Complex z0 = (b.Z0 ?? b.Z) * kT;
-                Complex? hv = Neutral(t.Id, "hv", group.Hv, t.HvNeutral, model.Buses[b.From].BaseKv, model.BaseMva, notes, ref problem);
-                Complex? lv = Neutral(t.Id, "lv", group.Lv, t.LvNeutral, model.Buses[b.To].BaseKv, model.BaseMva, notes, ref problem);
+                Complex? hv = Neutral(b.Id, "hv", group.Hv, w.HvNeutral, notes);
+                Complex? lv = Neutral(b.Id, "lv", group.Lv, w.LvNeutral, notes);
                 return ZeroSequencePath.TwoWinding(corrected, z0, group, hv, lv);
             }
             case BranchKind.ThreeWindingTransformer when group is not null:
             {
-                var t = threeWinding[b.Id];
+                PuWindings w = b.Windings!;
                 var (connection, earthing) = b.Winding switch
                 {
-                    "hv" => (group.Hv, t.HvNeutral),
-                    "mv" => (group.Mv!.Value, t.MvNeutral),
-                    _ => (group.Lv, t.LvNeutral),
+                    "hv" => (group.Hv, w.HvNeutral),
+                    "mv" => (group.Mv!.Value, w.MvNeutral),
+                    _ => (group.Lv, w.LvNeutral),
                 };
-                Complex? zn = Neutral(t.Id, b.Winding ?? "", connection, earthing, model.Buses[b.From].BaseKv, model.BaseMva, notes, ref problem);
+                Complex? zn = Neutral(b.Id, b.Winding ?? "", connection, earthing, notes);
                 return ZeroSequencePath.Winding(corrected, (b.Z0 ?? b.Z) * kT, connection, zn);
             }
             default:
@@ -146,23 +135,14 @@ internal sealed class SequenceBranches
     /// Neutral impedance in pu of the terminal bus base, or null when the winding is not earthed: no N in
     /// the vector group, or "grounded": false. An N winding without neutral data is taken as solidly earthed.
     /// </summary>
-    private static Complex? Neutral(string id, string winding, WindingConnection connection, Earthing? earthing, double busKv, double baseMva,
-        List<string> notes, ref InputException? problem)
+    private static Complex? Neutral(string id, string winding, WindingConnection connection, PuNeutral earthing, List<string> notes)
     {
         if (connection is not (WindingConnection.StarNeutral or WindingConnection.ZigzagNeutral)) return null;
-        if (earthing is null)
+        if (!earthing.Stated)
         {
             notes.Add($"{id}: {winding} neutral has no earthing data: taken as solidly earthed");
             return Complex.Zero;
         }
-        if (!earthing.Grounded) return null;
-        var zOhm = new Complex(earthing.ROhm, earthing.XOhm);
-        if (zOhm == Complex.Zero) return Complex.Zero;
-        if (!(busKv > 0))
-        {
-            problem ??= new InputException($"the {winding} neutral impedance is in ohm but the bus kV is not stated", elementId: id);
-            return null;
-        }
-        return zOhm / (busKv * busKv / baseMva);
+        return earthing.Earthed ? earthing.ZPu : null;
     }
 }

@@ -22,57 +22,48 @@ internal sealed class SourceAdmittances
     public static SourceAdmittances Build(PerUnitModel model, FaultMethod method, FaultLevel level, double[]? voltagePu,
         double fcOverF, List<string> notes)
     {
-        Network network = model.Network;
         int n = model.Buses.Count;
         var pos = new Complex[n];
         var neg = new Complex[n];
         var zero = new Complex[n];
         var eqf = new Complex[n];
         bool iec = method == FaultMethod.Iec60909;
-        var supplies = network.Supplies.ToDictionary(s => s.Id);
-        var generators = network.Generators.ToDictionary(g => g.Id);
         foreach (PuSource source in model.Sources)
         {
             PuBus bus = model.Buses[source.Bus];
             double kv = bus.BaseKv;
             if (source.Kind == ElementKind.Supply)
             {
-                Supply s = supplies[source.Id];
                 // The load-flow method drives the fault from the solved voltages: no c in Z_Q either.
                 double c = !iec ? 1.0 : level == FaultLevel.Max ? SupplyImpedance.CMax(kv) : SupplyImpedance.CMin(kv);
-                var z = SupplyImpedance.Convert(s, network.FindBus(s.Bus)!, model.BaseMva, c, level);
+                var z = SupplyImpedance.Convert(source.Id, source.FaultData!, kv, model.BaseMva, c, level);
                 pos[source.Bus] += 1.0 / z.Z1Pu;
                 neg[source.Bus] += 1.0 / z.Z1Pu;
                 zero[source.Bus] += 1.0 / z.Z0Pu;
                 eqf[source.Bus] += 1.0 / Faults.EquivalentFrequency.Series(z.Z1Pu, fcOverF);
                 continue;
             }
-            Generator g = generators[source.Id];
             if (source.Z1 is not Complex z1)
             {
-                notes.Add($"{g.Id}: no x''d (xdppPu with mva): left out of the fault study");
+                notes.Add($"{source.Id}: no x''d (xdppPu with mva): left out of the fault study");
                 continue;
             }
             double kG = 1.0;
             if (iec)
             {
-                kG = ImpedanceCorrection.Generator(g, kv, out bool assumed);
-                if (assumed) notes.Add($"{g.Id}: rated power factor not given: {ImpedanceCorrection.DefaultPowerFactor} assumed for K_G");
+                kG = ImpedanceCorrection.Generator(source.Rating!, kv, out bool assumed);
+                if (assumed) notes.Add($"{source.Id}: rated power factor not given: {ImpedanceCorrection.DefaultPowerFactor} assumed for K_G");
             }
             pos[source.Bus] += 1.0 / (kG * z1);
             neg[source.Bus] += 1.0 / (kG * (source.Z2 ?? z1));
             eqf[source.Bus] += 1.0 / Faults.EquivalentFrequency.Series(kG * z1, fcOverF);
             if (source.Z0 is not Complex z0)
-                notes.Add($"{g.Id}: no x0: contributes nothing to the zero sequence");
-            else if (g.Neutral is not { Grounded: true } earthing)
-                notes.Add($"{g.Id}: neutral not earthed{(g.Neutral is null ? " (no neutral data)" : "")}: contributes nothing to the zero sequence");
+                notes.Add($"{source.Id}: no x0: contributes nothing to the zero sequence");
+            else if (source.Neutral is not { Stated: true, Earthed: true } neutral)
+                notes.Add($"{source.Id}: neutral not earthed{(source.Neutral is { Stated: false } ? " (no neutral data)" : "")}: contributes nothing to the zero sequence");
             else
             {
-                var znOhm = new Complex(earthing.ROhm, earthing.XOhm);
-                if (znOhm != Complex.Zero && !(kv > 0))
-                    throw new InputException("the neutral impedance is in ohm but the bus kV is not stated", elementId: g.Id);
-                Complex zn = znOhm == Complex.Zero ? Complex.Zero : znOhm / (kv * kv / model.BaseMva);
-                zero[source.Bus] += 1.0 / (kG * z0 + 3 * zn);
+                zero[source.Bus] += 1.0 / (kG * z0 + 3 * neutral.ZPu);
             }
         }
 

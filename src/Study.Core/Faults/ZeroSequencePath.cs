@@ -1,5 +1,6 @@
 // What a branch looks like to zero-sequence current: a series path, an earthing at one or both ends, or open.
 using System.Numerics;
+using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.Faults;

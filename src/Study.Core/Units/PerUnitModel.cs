@@ -51,6 +51,14 @@ public sealed record PuBranch
     public Complex? Z0 { get; init; }
     /// <summary>Zero-sequence total charging susceptance; null when not given.</summary>
     public double? B0 { get; init; }
+    /// <summary>Two-winding nameplate data (one unit) for the correction factors; null for lines and the per-unit form.</summary>
+    public TransformerRating? Rating { get; init; }
+    /// <summary>Pairwise data of the bank, on each winding branch of a three-winding transformer.</summary>
+    public ThreeWindingRating? ThreeWindingRating { get; init; }
+    /// <summary>Vector group and neutral earthing (transformers); null for lines.</summary>
+    public PuWindings? Windings { get; init; }
+    /// <summary>Identical units in parallel (two-winding transformers).</summary>
+    public int Units { get; init; } = 1;
 }
 
 /// <summary>A source: supply point or generator, with its load-flow role.</summary>
@@ -71,6 +79,12 @@ public sealed record PuSource
     public Complex? Z1 { get; init; }
     public Complex? Z2 { get; init; }
     public Complex? Z0 { get; init; }
+    /// <summary>Supply points: the declared fault levels (null for generators).</summary>
+    public SupplyFaultData? FaultData { get; init; }
+    /// <summary>Generators: rated data for the correction factor K_G (null for supplies).</summary>
+    public GeneratorRating? Rating { get; init; }
+    /// <summary>Generators: neutral earthing, on the bus base (null for supplies).</summary>
+    public PuNeutral? Neutral { get; init; }
 }
 
 /// <summary>A load in pu at 1 pu voltage, already scaled by the scenario.</summary>
@@ -133,14 +147,21 @@ public sealed record PuTap
 /// </summary>
 public sealed partial record PerUnitModel
 {
-    public required Network Network { get; init; }
+    /// <summary>The network's name (for titles and messages).</summary>
+    public string Name { get; init; } = "";
     public Scenario? Scenario { get; init; }
     public double BaseMva { get; init; }
+    public double FrequencyHz { get; init; } = 50;
+    /// <summary>True when no bus states its base kV: results in per unit only.</summary>
+    public bool PerUnitOnly { get; init; }
+    /// <summary>Ids of the buses left out because they are out of service (for messages that name them).</summary>
+    public IReadOnlySet<string> OutOfServiceBuses { get; init; } = new HashSet<string>();
     public IReadOnlyList<PuBus> Buses { get; init; } = [];
     public IReadOnlyList<PuBranch> Branches { get; init; } = [];
     public IReadOnlyList<PuSource> Sources { get; init; } = [];
     public IReadOnlyList<PuLoad> Loads { get; init; } = [];
     public IReadOnlyList<PuShunt> Shunts { get; init; } = [];
     public IReadOnlyList<PuTap> Taps { get; init; } = [];
+    public IReadOnlyList<PuBreaker> Breakers { get; init; } = [];
     public IReadOnlyDictionary<string, int> BusIndex { get; init; } = new Dictionary<string, int>();
 }

@@ -67,11 +67,15 @@ public sealed partial record PerUnitModel
                 taps.Add(NewTap(t.Id, branches.Count, tap, c.HvFactor, c.LvFactor, factorAtFrom: false));
                 if (tap.Regulate is { } reg) regulations.Add((tapIndex.Value, t.Id, reg));
             }
+            PuNeutral hvNeutral = PuNeutral.Compile(t.HvNeutral, hv.Kv, baseMva, t.Id, "hvNeutral");
+            PuNeutral lvNeutral = PuNeutral.Compile(t.LvNeutral, lv.Kv, baseMva, t.Id, "lvNeutral");
             branches.Add(new PuBranch
             {
                 Id = t.Id, Kind = BranchKind.Transformer, From = index[t.Hv], To = index[t.Lv],
                 Z = c.ZPu, Z0 = c.Z0Pu, B = c.BPu, Ratio = c.Ratio, ShiftRad = c.ShiftRad,
                 MagnetisingY = c.MagnetisingY, RatingMva = c.RatingMva, Tap = tapIndex,
+                Rating = TransformerRating.Of(t), Units = t.Units,
+                Windings = PuWindings.Compile(t.Id, t.VectorGroup, threeWinding: false, hvNeutral, PuNeutral.NotStated, lvNeutral),
             });
         }
 
@@ -85,6 +89,11 @@ public sealed partial record PerUnitModel
             int star = buses.Count;
             index[starId] = star;
             buses.Add(new PuBus { Id = starId, BaseKv = c.StarBaseKv, IsInternal = true });
+            var windings = PuWindings.Compile(t.Id, t.VectorGroup, threeWinding: true,
+                PuNeutral.Compile(t.HvNeutral, hv.Kv, baseMva, t.Id, "hvNeutral"),
+                PuNeutral.Compile(t.MvNeutral, mv.Kv, baseMva, t.Id, "mvNeutral"),
+                PuNeutral.Compile(t.LvNeutral, lv.Kv, baseMva, t.Id, "lvNeutral"));
+            var rating = ThreeWindingRating.Of(t, mv.Kv, lv.Kv);
             foreach (var (w, terminal) in new[] { (c.Hv, t.Hv), (c.Mv, t.Mv), (c.Lv, t.Lv) })
             {
                 int? tapIndex = null;
@@ -99,6 +108,7 @@ public sealed partial record PerUnitModel
                     Id = t.Id, Kind = BranchKind.ThreeWindingTransformer, From = index[terminal], To = star,
                     Z = w.ZPu, Z0 = w.ZPu, Ratio = w.Ratio, RatingMva = w.RatingMva, Winding = w.Winding, Tap = tapIndex,
                     MagnetisingY = w.Winding == "hv" ? c.MagnetisingY : Complex.Zero,
+                    ThreeWindingRating = rating, Windings = windings,
                 });
             }
         }
@@ -123,7 +133,7 @@ public sealed partial record PerUnitModel
             sources.Add(new PuSource
             {
                 Id = s.Id, Kind = ElementKind.Supply, Bus = index[s.Bus], Mode = GeneratorMode.Slack,
-                VSet = s.VSet, AngleRad = s.AngleDeg * Math.PI / 180.0,
+                VSet = s.VSet, AngleRad = s.AngleDeg * Math.PI / 180.0, FaultData = SupplyFaultData.Of(s),
             });
         }
         double generationScale = scenario?.GenerationScale ?? 1.0;
@@ -135,6 +145,7 @@ public sealed partial record PerUnitModel
             {
                 Id = g.Id, Kind = ElementKind.Generator, Bus = index[g.Bus], Mode = g.Mode,
                 P = c.P, Q = c.Q, VSet = c.VSet, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
+                Rating = GeneratorRating.Of(g), Neutral = PuNeutral.Compile(g.Neutral, bus.Kv, baseMva, g.Id, "neutral"),
             });
         }
 
@@ -154,11 +165,20 @@ public sealed partial record PerUnitModel
             shunts.Add(new PuShunt { Id = s.Id, Bus = index[s.Bus], G = c.G, B = c.B });
         }
 
+        var breakers = new List<PuBreaker>();
+        foreach (var b in network.Breakers)
+        {
+            if (!b.InService || !Live(b.Bus, b.Id, out _)) continue;
+            breakers.Add(new PuBreaker { Id = b.Id, Bus = index[b.Bus], BusId = b.Bus, InterruptingKa = b.InterruptingKa, PeakKa = b.PeakKa });
+        }
+
         return new PerUnitModel
         {
-            Network = network, Scenario = scenario, BaseMva = baseMva,
+            Name = network.Name, Scenario = scenario, BaseMva = baseMva, FrequencyHz = network.FrequencyHz,
+            PerUnitOnly = network.IsPerUnitOnly,
+            OutOfServiceBuses = network.Buses.Where(b => !b.InService).Select(b => b.Id).ToHashSet(),
             Buses = buses, Branches = branches, Sources = sources, Loads = loads, Shunts = shunts, Taps = taps,
-            BusIndex = index, Warnings = warnings,
+            Breakers = breakers, BusIndex = index, Warnings = warnings,
         };
     }
 

@@ -33,21 +33,27 @@ public static class SupplyImpedance
     /// <summary>Voltage factor c_min: 1.00 above 1 kV, 0.95 at or below (IEC 60909-0 Table 1, from memory).</summary>
     public static double CMin(double unKv) => unKv > 1.0 || unKv == 0 ? 1.00 : 0.95;
 
-    public static SupplyImpedanceResult Convert(Supply supply, Bus bus, double baseMva, double c, FaultLevel level)
+    /// <exception cref="InputException">The fault level needed is missing or not positive.</exception>
+    public static SupplyImpedanceResult Convert(Supply supply, Bus bus, double baseMva, double c, FaultLevel level) =>
+        Convert(supply.Id, SupplyFaultData.Of(supply), bus.Kv, baseMva, c, level);
+
+    /// <summary>The same from compiled data: <paramref name="busKv"/> is the supply bus's base kV (0 when not stated).</summary>
+    /// <exception cref="InputException">The fault level needed is missing or not positive.</exception>
+    public static SupplyImpedanceResult Convert(string supplyId, SupplyFaultData supply, double busKv, double baseMva, double c, FaultLevel level)
     {
         double? declared = level == FaultLevel.Max ? supply.ScMvaMax : supply.ScMvaMin ?? supply.ScMvaMax;
         string field = level == FaultLevel.Max ? "scMvaMax" : "scMvaMin";
         if (declared is null)
-            throw new InputException($"{field} is missing: the supply's fault level is needed for fault studies", elementId: supply.Id);
+            throw new InputException($"{field} is missing: the supply's fault level is needed for fault studies", elementId: supplyId);
         if (!(declared > 0))
-            throw new InputException($"{field} must be positive (got {N(declared.Value)})", elementId: supply.Id);
+            throw new InputException($"{field} must be positive (got {N(declared.Value)})", elementId: supplyId);
 
         var d = new Derivation();
         double sk = level == FaultLevel.Min && supply.ScMvaMin is null
             ? d.Assumed("S''kQ", $"scMvaMin not given: = scMvaMax = {N(declared.Value)}", declared.Value, "MVA", "scMvaMin defaults to scMvaMax (default, not data)")
             : d.Step("S''kQ", $"{field} given", declared.Value, "MVA");
         d.Step("c", level == FaultLevel.Max ? "c_max" : "c_min", c, "");
-        double xr = supply.Xr is double given
+        double xr = supply.XOverR is double given
             ? d.Step("X/R", "xr given", given, "")
             : d.Assumed("X/R", $"= {N(DefaultXOverR)}", DefaultXOverR, "", "xr not given: R_Q = 0.1 · X_Q assumed (IEC 60909-0, from memory)");
         double z0z1 = supply.Z0Z1 is double ratio
@@ -62,9 +68,9 @@ public static class SupplyImpedance
         d.Step("|z0_Q|", $"Z0/Z1 · |z_Q| = {N(z0z1)} · {N(zPu)}", z0Pu.Magnitude, "pu");
 
         Complex? z1Ohm = null, z0Ohm = null;
-        if (bus.Kv > 0)
+        if (busKv > 0)
         {
-            double zOhm = d.Step("|Z_Q|", $"c · U_n² / S''kQ = {N(c)} · {N(bus.Kv)}² / {N(sk)}", c * bus.Kv * bus.Kv / sk, "ohm");
+            double zOhm = d.Step("|Z_Q|", $"c · U_n² / S''kQ = {N(c)} · {N(busKv)}² / {N(sk)}", c * busKv * busKv / sk, "ohm");
             double rOhm = d.Step("R_Q", $"|Z_Q| / √(1 + (X/R)²) = {N(zOhm)} / √(1 + {N(xr)}²)", zOhm / Math.Sqrt(1 + xr * xr), "ohm");
             double xOhm = d.Step("X_Q", $"R_Q · X/R = {N(rOhm)} · {N(xr)}", rOhm * xr, "ohm");
             z1Ohm = new Complex(rOhm, xOhm);

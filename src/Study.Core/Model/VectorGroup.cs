@@ -1,8 +1,7 @@
 // IEC 60076-1 vector-group notation (YNd11, Dyn1, YNyn0d1, Yzn11): winding connections and clock numbers.
 using System.Globalization;
-using Study.Core.Model;
 
-namespace Study.Core.Faults;
+namespace Study.Core.Model;
 
 /// <summary>How one winding is connected; the N forms have the star point brought out for earthing.</summary>
 public enum WindingConnection
