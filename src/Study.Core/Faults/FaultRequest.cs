@@ -10,6 +10,9 @@ public sealed record FaultRequest
 {
     public static FaultRequest Default { get; } = new();
 
+    /// <summary>Scenario name whose loads the load-flow method solves; null for the loads as entered.</summary>
+    public string? Scenario { get; init; }
+
     /// <summary>Bus ids to fault; null means every bus (internal star points of three-winding banks excepted).</summary>
     public IReadOnlyList<string>? Buses { get; init; }
 
@@ -34,4 +37,17 @@ public sealed record FaultRequest
 
     /// <summary>Each branch's current into the faulted bus.</summary>
     public bool IncludeContributions { get; init; } = true;
+
+    /// <summary>Checks what can be checked without the network.</summary>
+    /// <exception cref="Model.InputException">No fault type, a fault impedance that is not finite or has negative resistance, or a blank bus id.</exception>
+    public void Validate()
+    {
+        if (Kinds.Count == 0) throw new Model.InputException("no fault type asked for (3ph, slg, ll, dlg)");
+        Complex zf = FaultImpedanceOhm;
+        if (!double.IsFinite(zf.Real) || !double.IsFinite(zf.Imaginary))
+            throw new Model.InputException("the fault impedance must be finite (R, X in ohm)");
+        if (zf.Real < 0) throw new Model.InputException("the fault resistance must not be negative");
+        if (Buses is { } buses && buses.Any(string.IsNullOrWhiteSpace)) throw new Model.InputException("a bus id to fault is blank");
+        LoadFlowOptions?.Validate();
+    }
 }

@@ -5,6 +5,15 @@ namespace Study.Core.Faults;
 
 public sealed record FaultResult
 {
+    /// <summary>
+    /// Why the study could not run, when it could not (the pre-fault load flow of the load-flow method did
+    /// not converge); null when it ran. A failed study holds no faults.
+    /// </summary>
+    public string? Failure { get; init; }
+
+    /// <summary>True when the study ran.</summary>
+    public bool Completed => Failure is null;
+
     public FaultMethod Method { get; init; }
     public FaultLevel Level { get; init; }
     /// <summary>The caution every fault output carries (<see cref="FaultStudy.Caution"/>).</summary>

@@ -22,7 +22,7 @@ public static class FaultStudy
     public static FaultResult Run(PerUnitModel model, FaultRequest? request = null, CancellationToken cancel = default)
     {
         request ??= FaultRequest.Default;
-        if (request.Kinds.Count == 0) throw new InputException("no fault type asked for (3ph, slg, ll, dlg)");
+        request.Validate();
         int[] buses = SelectBuses(model, request.Buses);
         var notes = new List<string>();
 
@@ -33,7 +33,11 @@ public static class FaultStudy
             LoadFlowResult flow = request.PreFault
                 ?? LoadFlowSolver.Solve(model, (request.LoadFlowOptions ?? LoadFlowOptions.Default) with { IncludeInternalBuses = true }, cancel);
             if (!flow.Converged)
-                throw new InputException($"the pre-fault load flow did not converge ({flow.Message}); the iec60909 method needs no load flow");
+                return new FaultResult
+                {
+                    Method = request.Method, Level = request.Level, PerUnitOnly = model.PerUnitOnly,
+                    Failure = $"the pre-fault load flow did not converge: {flow.Message} (the iec60909 method needs no load flow)",
+                };
             model = WithSolvedTaps(model, flow);
             (preFault, voltage) = Voltages(model, flow);
             notes.Add("load-flow method: branch contributions are the fault-induced change, without the pre-fault load current");

@@ -28,4 +28,24 @@ public sealed record LoadFlowOptions
 
     /// <summary>Keep the Jacobian at the final state in <see cref="LoadFlowResult.Jacobian"/> (diagnosis).</summary>
     public bool CaptureJacobian { get; init; }
+
+    /// <summary>Tightest and loosest tolerance accepted, pu: below 1e-13 rounding alone keeps the mismatch up; above 1e-3 (0.1 MW on 100 MVA) the answer is not a solution.</summary>
+    public const double MinTolerancePu = 1e-13, MaxTolerancePu = 1e-3;
+
+    /// <summary>Most Newton-Raphson iterations, or control rounds, that may be asked for.</summary>
+    public const int MaxIterationLimit = 1000;
+
+    /// <summary>Checks the options against their bounds, so every front end refuses the same values with the same words.</summary>
+    /// <exception cref="Model.InputException">An option is out of bounds.</exception>
+    public void Validate()
+    {
+        if (!(TolerancePu >= MinTolerancePu && TolerancePu <= MaxTolerancePu))
+            throw new Model.InputException(
+                $"the tolerance {TolerancePu.ToString("G3", System.Globalization.CultureInfo.InvariantCulture)} pu is outside "
+                + $"{MinTolerancePu:0e0}..{MaxTolerancePu:0e0} pu (1e-8 is the default)");
+        if (MaxIterations < 1 || MaxIterations > MaxIterationLimit)
+            throw new Model.InputException($"the iteration limit {MaxIterations} is outside 1..{MaxIterationLimit} (30 is the default)");
+        if (MaxControlRounds < 0 || MaxControlRounds > MaxIterationLimit)
+            throw new Model.InputException($"the control-round limit {MaxControlRounds} is outside 0..{MaxIterationLimit}");
+    }
 }

@@ -1,7 +1,5 @@
 // Compare two cases — two networks (before and after a change) or two scenarios — bus by bus and branch by branch.
 using Study.Core.LoadFlow;
-using Study.Core.Model;
-using Study.Core.Units;
 
 namespace Study.Core.Studies;
 
@@ -11,15 +9,6 @@ namespace Study.Core.Studies;
 /// </summary>
 public static class CaseComparison
 {
-    /// <summary>Solves both cases (each from a flat start) and compares them.</summary>
-    public static CaseComparisonResult Run(Network before, Scenario? beforeScenario, Network after, Scenario? afterScenario,
-        LoadFlowOptions? options = null, CancellationToken cancel = default)
-    {
-        LoadFlowResult b = LoadFlowSolver.Solve(PerUnitModel.Build(before, beforeScenario), options, cancel);
-        LoadFlowResult a = LoadFlowSolver.Solve(PerUnitModel.Build(after, afterScenario), options, cancel);
-        return Compare(b, a);
-    }
-
     public static CaseComparisonResult Compare(LoadFlowResult before, LoadFlowResult after)
     {
         var result = new CaseComparisonResult

@@ -1,14 +1,13 @@
 // Outage screening (N-1): each line and transformer out in turn, in each scenario, ranked by severity.
 using Study.Core.LoadFlow;
-using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.Studies;
 
 /// <summary>
 /// Solves the intact case of each scenario, then each outage warm started from it. Outages run in
-/// parallel, each on its own model built from the network with that element out (the solver keeps no
-/// shared state), and land in a fixed slot so the result never depends on which core finished first.
+/// parallel, each on its own model: the intact model with that element's branches taken out (the solver
+/// keeps no shared state), and land in a fixed slot so the result never depends on which core finished first.
 /// An outage is judged against the intact case of the same scenario: a violation counts as new when
 /// the intact case does not have it, or has it by a smaller margin.
 /// </summary>
@@ -17,42 +16,42 @@ public static class OutageScreening
     /// <summary>A violation already present in the intact case counts again only when worse by more than this.</summary>
     private const double WorseLoadingPercent = 0.1, WorseVoltagePu = 1e-4;
 
-    public static OutageScreeningResult Run(Network network, OutageScreeningRequest request, LoadFlowOptions? options = null,
-        IProgress<double>? progress = null, CancellationToken cancel = default)
+    /// <param name="intactModels">The intact case of each scenario to screen, compiled.</param>
+    /// <param name="elements">The lines and transformers to take out, one at a time, in this order.</param>
+    public static OutageScreeningResult Run(IReadOnlyList<PerUnitModel> intactModels, IReadOnlyList<OutageElement> elements,
+        LoadFlowOptions? options = null, int? maxParallelism = null, IProgress<double>? progress = null, CancellationToken cancel = default)
     {
         options ??= LoadFlowOptions.Default;
-        IReadOnlyList<OutageElement> elements = OutageElements.Pick(network, request.ElementIds);
-        IReadOnlyList<Scenario?> scenarios = request.Scenarios.Count > 0 ? request.Scenarios.ToList<Scenario?>() : [null];
-        var intact = scenarios.Select(s => LoadFlowSolver.Solve(PerUnitModel.Build(network, s), options, cancel)).ToArray();
+        var intact = intactModels.Select(m => LoadFlowSolver.Solve(m, options, cancel)).ToArray();
 
-        int total = scenarios.Count * elements.Count, done = 0;
+        int total = intactModels.Count * elements.Count, done = 0;
         var cases = new OutageCase[total];
         var gate = new object();
         var parallel = new ParallelOptions
         {
-            MaxDegreeOfParallelism = Math.Max(1, request.MaxParallelism ?? Environment.ProcessorCount),
+            MaxDegreeOfParallelism = Math.Max(1, maxParallelism ?? Environment.ProcessorCount),
             CancellationToken = cancel,
         };
         Parallel.For(0, total, parallel, k =>
         {
             int s = k / elements.Count;
             OutageElement element = elements[k % elements.Count];
-            PerUnitModel model = PerUnitModel.Build(OutageElements.Without(network, element), scenarios[s]);
+            PerUnitModel model = intactModels[s].WithoutBranch(element.Id);
             LoadFlowResult outage = LoadFlowSolver.Solve(model,
                 options with { WarmStart = intact[s].Converged ? intact[s] : null }, cancel);
-            cases[k] = Assess(element, scenarios[s]?.Name, intact[s], outage);
+            cases[k] = Assess(element, intactModels[s].Scenario?.Name, intact[s], outage);
             if (progress is null) return;
             lock (gate) progress.Report(++done / (double)total);
         });
 
-        var screenings = new List<ScenarioScreening>(scenarios.Count);
-        for (int s = 0; s < scenarios.Count; s++)
+        var screenings = new List<ScenarioScreening>(intactModels.Count);
+        for (int s = 0; s < intactModels.Count; s++)
         {
             var ranked = cases.Skip(s * elements.Count).Take(elements.Count)
                 .OrderByDescending(c => c.Severity).ThenByDescending(c => c.StressPercent).ToList();
             screenings.Add(new ScenarioScreening
             {
-                Scenario = scenarios[s]?.Name, IntactConverged = intact[s].Converged, IntactMessage = intact[s].Message,
+                Scenario = intactModels[s].Scenario?.Name, IntactConverged = intact[s].Converged, IntactMessage = intact[s].Message,
                 IntactLoadMw = intact[s].Totals.LoadMw, IntactViolations = intact[s].Violations, Outages = ranked,
             });
         }

@@ -6,35 +6,38 @@ using Study.Core.Units;
 namespace Study.Core.Studies;
 
 /// <summary>
-/// For one transformer, every position from min to max is solved in each scenario, warm started
+/// For one transformer, every position from min to max is solved in each scenario (one compiled model
+/// each), warm started
 /// from the neighbouring position. The studied tap is held at each position (its own regulation,
 /// if any, is off); other on-load taps regulate unless asked to hold. A position is recommended when
 /// every watched bus stays inside its band in every scenario; positions rank by the worst margin.
 /// </summary>
 public static class TapStudy
 {
-    public static TapStudyResult Run(Network network, TapStudyRequest request, LoadFlowOptions? options = null,
+    /// <param name="models">The network compiled for each scenario to solve (the loads as entered: one model without a scenario).</param>
+    /// <exception cref="InputException">The transformer has no tap changer in the models, or a watched bus is not in them.</exception>
+    public static TapStudyResult Run(IReadOnlyList<PerUnitModel> models, TapStudyRequest request, LoadFlowOptions? options = null,
         IProgress<double>? progress = null, CancellationToken cancel = default)
     {
         options ??= LoadFlowOptions.Default;
-        var (tapChanger, lvBus) = FindTap(network, request.TransformerId);
-        if (request.Band is { } band && !(band.Low < band.High))
-            throw new InputException($"the band {band.Low}..{band.High} is empty: give LO below HI, e.g. 0.97,1.03");
-        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(network, lvBus);
+        request.Validate();
+        if (models.Count == 0) throw new ArgumentException("a tap study needs at least one model", nameof(models));
+        PerUnitModel first = models[0];
+        int tapIndex = TapIndex(first, request.TransformerId);
+        PuTap tapChanger = first.Taps[tapIndex];
+        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger));
         foreach (string bus in watch)
-            if (network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+            if (!first.BusIndex.ContainsKey(bus)) throw new InputException($"watched bus {bus} is not in the network (or is out of service)", elementId: bus);
 
-        IReadOnlyList<Scenario?> scenarios = request.Scenarios.Count > 0 ? request.Scenarios.ToList<Scenario?>() : [null];
         var points = new List<TapStudyPoint>();
-        int total = scenarios.Count * (tapChanger.Max - tapChanger.Min + 1), done = 0;
+        int total = models.Count * (tapChanger.Max - tapChanger.Min + 1), done = 0;
         var solveOptions = options with { RegulateTaps = options.RegulateTaps && !request.HoldOtherTaps };
-        foreach (Scenario? scenario in scenarios)
+        foreach (PerUnitModel scenarioModel in models)
         {
-            PerUnitModel model = PerUnitModel.Build(network, scenario);
-            int k = TapIndex(model, request.TransformerId);
-            var taps = model.Taps.ToArray();
+            int k = TapIndex(scenarioModel, request.TransformerId);
+            var taps = scenarioModel.Taps.ToArray();
             taps[k] = taps[k] with { RegulatedBus = null };
-            model = model with { Taps = taps };
+            PerUnitModel model = scenarioModel with { Taps = taps };
             LoadFlowResult? previous = null;
             for (int position = tapChanger.Min; position <= tapChanger.Max; position++)
             {
@@ -42,14 +45,14 @@ public static class TapStudy
                 PerUnitModel at = model.WithTapPosition(k, position);
                 LoadFlowResult r = LoadFlowSolver.Solve(at, solveOptions with { WarmStart = previous }, cancel);
                 if (r.Converged) previous = r;
-                points.Add(Point(network, at, k, position, scenario, r, watch, request.Band));
+                points.Add(Point(at, k, position, scenarioModel.Scenario, r, watch, request.Band));
                 progress?.Report(++done / (double)total);
             }
         }
-        return Rank(request, tapChanger, watch, scenarios, points);
+        return Rank(request, tapChanger, watch, models.Select(m => m.Scenario).ToList(), points);
     }
 
-    private static TapStudyPoint Point(Network network, PerUnitModel model, int tap, int position, Scenario? scenario,
+    private static TapStudyPoint Point(PerUnitModel model, int tap, int position, Scenario? scenario,
         LoadFlowResult r, IReadOnlyList<string> watch, (double Low, double High)? band)
     {
         double ratio = model.Branches[model.Taps[tap].Branch].Ratio;
@@ -75,7 +78,7 @@ public static class TapStudy
         };
     }
 
-    private static TapStudyResult Rank(TapStudyRequest request, TapChanger tap, IReadOnlyList<string> watch,
+    private static TapStudyResult Rank(TapStudyRequest request, PuTap tap, IReadOnlyList<string> watch,
         IReadOnlyList<Scenario?> scenarios, List<TapStudyPoint> points)
     {
         var worst = points.GroupBy(p => p.Position)
@@ -106,45 +109,42 @@ public static class TapStudy
         };
     }
 
-    private static (TapChanger Tap, string LvBus) FindTap(Network network, string id)
-    {
-        if (network.Transformers.FirstOrDefault(t => t.Id == id) is { } t)
-            return (t.Tap ?? throw new InputException($"transformer {id} has no tap changer: there are no positions to study", elementId: id), t.Lv);
-        if (network.ThreeWindingTransformers.FirstOrDefault(t => t.Id == id) is { } t3)
-            return (t3.Tap ?? throw new InputException($"transformer {id} has no tap changer: there are no positions to study", elementId: id), t3.Lv);
-        string known = string.Join(", ", network.Transformers.Where(x => x.Tap is not null).Select(x => x.Id)
-            .Concat(network.ThreeWindingTransformers.Where(x => x.Tap is not null).Select(x => x.Id)));
-        throw new InputException($"no transformer with id {id}" + (known.Length > 0 ? $" (transformers with taps: {known})" : ""), elementId: id);
-    }
-
     private static int TapIndex(PerUnitModel model, string id)
     {
         for (int k = 0; k < model.Taps.Count; k++) if (model.Taps[k].Id == id) return k;
-        throw new InputException($"transformer {id} is out of service (or on an out-of-service bus): nothing to study", elementId: id);
+        throw new InputException($"transformer {id} has no tap changer in service: nothing to study", elementId: id);
+    }
+
+    /// <summary>The lv terminal of the tapped transformer: a two-winding bank's To bus, a three-winding bank's lv winding terminal.</summary>
+    private static int LvBus(PerUnitModel model, PuTap tap)
+    {
+        PuBranch tapped = model.Branches[tap.Branch];
+        if (tapped.Kind != BranchKind.ThreeWindingTransformer) return tapped.To;
+        foreach (PuBranch b in model.Branches)
+            if (b.Id == tapped.Id && b.Winding == "lv") return b.From;
+        return tapped.From;
     }
 
     /// <summary>The lv bus and every bus reached from it through lines alone (its own voltage level).</summary>
-    internal static IReadOnlyList<string> FedBuses(Network network, string lvBus)
+    internal static IReadOnlyList<string> FedBuses(PerUnitModel model, int lvBus)
     {
-        var neighbours = new Dictionary<string, List<string>>();
-        void Link(string a, string b)
+        var neighbours = new List<int>[model.Buses.Count];
+        foreach (PuBranch l in model.Branches)
         {
-            if (!neighbours.TryGetValue(a, out var list)) neighbours[a] = list = [];
-            list.Add(b);
+            if (l.Kind != BranchKind.Line) continue;
+            (neighbours[l.From] ??= []).Add(l.To);
+            (neighbours[l.To] ??= []).Add(l.From);
         }
-        foreach (Line l in network.Lines.Where(l => l.InService))
-        {
-            Link(l.From, l.To);
-            Link(l.To, l.From);
-        }
-        var seen = new List<string> { lvBus };
-        var visited = new HashSet<string> { lvBus };
-        var queue = new Queue<string>([lvBus]);
+        var seen = new List<string> { model.Buses[lvBus].Id };
+        var visited = new bool[model.Buses.Count];
+        visited[lvBus] = true;
+        var queue = new Queue<int>([lvBus]);
         while (queue.Count > 0)
-            foreach (string other in neighbours.GetValueOrDefault(queue.Dequeue()) ?? [])
-                if (visited.Add(other))
+            foreach (int other in neighbours[queue.Dequeue()] ?? [])
+                if (!visited[other])
                 {
-                    seen.Add(other);
+                    visited[other] = true;
+                    seen.Add(model.Buses[other].Id);
                     queue.Enqueue(other);
                 }
         return seen;

@@ -13,9 +13,25 @@ public sealed record TapStudyRequest
     /// <summary>The band, pu; null means each watched bus's own vMin..vMax.</summary>
     public (double Low, double High)? Band { get; init; }
 
-    /// <summary>Scenarios to solve; empty means "loads as entered" (one case).</summary>
-    public IReadOnlyList<Scenario> Scenarios { get; init; } = [];
+    /// <summary>Scenario names to solve; empty means every scenario of the network (the loads as entered when it has none); a null name is the loads as entered.</summary>
+    public IReadOnlyList<string?> Scenarios { get; init; } = [];
 
     /// <summary>Hold every other on-load tap at its file position instead of letting it regulate.</summary>
     public bool HoldOtherTaps { get; init; }
+
+    /// <summary>Checks what can be checked without the network: the band (the same words in every front end).</summary>
+    /// <exception cref="InputException">The band is empty, not finite, or not in per unit.</exception>
+    public void Validate()
+    {
+        if (Band is not { } band) return;
+        string shown = $"{Show(band.Low)}..{Show(band.High)}";
+        if (!double.IsFinite(band.Low) || !double.IsFinite(band.High))
+            throw new InputException($"the band {shown} must be two finite numbers in per unit, e.g. 0.97..1.03");
+        if (!(band.Low < band.High))
+            throw new InputException($"the band {shown} is empty: give the low limit below the high limit, e.g. 0.97..1.03");
+        if (band.Low <= 0 || band.High > 2)
+            throw new InputException($"the band {shown} is not in per unit: give limits around 1, e.g. 0.97..1.03");
+    }
+
+    private static string Show(double v) => v.ToString("0.####", System.Globalization.CultureInfo.InvariantCulture);
 }

@@ -200,6 +200,37 @@ public sealed partial record PerUnitModel
         return this with { Taps = newTaps, Branches = newBranches };
     }
 
+    /// <summary>
+    /// The same model with every branch of element <paramref name="id"/> taken out (a line, a
+    /// transformer, or the three winding branches of a three-winding bank, whose star bus is then left
+    /// on its own and de-energised). Tap changers of the element go with it; the other branches and taps
+    /// keep their order, so results list them as a build without the element would.
+    /// </summary>
+    public PerUnitModel WithoutBranch(string id)
+    {
+        var keptBranches = new List<PuBranch>(Branches.Count);
+        var newIndex = new int[Branches.Count];
+        for (int k = 0; k < Branches.Count; k++)
+        {
+            newIndex[k] = -1;
+            if (Branches[k].Id == id) continue;
+            newIndex[k] = keptBranches.Count;
+            keptBranches.Add(Branches[k]);
+        }
+        if (keptBranches.Count == Branches.Count) return this;
+        var keptTaps = new List<PuTap>(Taps.Count);
+        var tapIndex = new int?[Taps.Count];
+        for (int t = 0; t < Taps.Count; t++)
+        {
+            if (newIndex[Taps[t].Branch] < 0) continue;
+            tapIndex[t] = keptTaps.Count;
+            keptTaps.Add(Taps[t] with { Branch = newIndex[Taps[t].Branch] });
+        }
+        for (int k = 0; k < keptBranches.Count; k++)
+            if (keptBranches[k].Tap is int t) keptBranches[k] = keptBranches[k] with { Tap = tapIndex[t] };
+        return this with { Branches = keptBranches, Taps = keptTaps };
+    }
+
     private static PuTap NewTap(string id, int branch, TapChanger tap, double hvFactor, double lvFactor, bool factorAtFrom) => new()
     {
         Id = id, Branch = branch, Side = tap.Side, StepPercent = tap.StepPercent,

@@ -93,7 +93,7 @@ public class InputErrorTests
         Assert.Contains("NOPE", unknown.Err);
         CliOutcome band = CliRun.Run("taps", demo, "--transformer", "CQ-T1", "--band", "1.03,0.97");
         Assert.Equal(2, band.ExitCode);
-        Assert.Contains("LO must be below HI", band.Err);
+        Assert.Contains("the band 1.03..0.97 is empty", band.Err);
         string path = CliRun.TempFile("notap.study.json", Good);
         CliOutcome noTap = CliRun.Run("taps", path, "--transformer", "T1");
         Assert.Equal(2, noTap.ExitCode);

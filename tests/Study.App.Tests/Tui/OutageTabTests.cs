@@ -10,6 +10,7 @@ using Terminal.Gui.Input;
 using Terminal.Gui.Time;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using Study.Core.Cases;
 
 namespace Study.App.Tests.Tui;
 
@@ -19,11 +20,12 @@ public sealed class OutageTabTests
     public void Outage_form_screens_the_active_scenario_or_every_scenario()
     {
         Network n = DemoNetwork.Read();
-        Assert.Empty(new OutageForm(n, null).Build().Request!.Scenarios);
+        // A null name is the loads as entered; an empty list asks for every scenario.
+        Assert.Null(Assert.Single(new OutageForm(n, null).Build().Request!.Scenarios));
         var form = new OutageForm(n, "summer-night");
-        Assert.Equal("summer-night", Assert.Single(form.Build().Request!.Scenarios).Name);
+        Assert.Equal("summer-night", Assert.Single(form.Build().Request!.Scenarios));
         form.AllScenarios = true;
-        Assert.Equal(n.Scenarios.Count, form.Build().Request!.Scenarios.Count);
+        Assert.Empty(form.Build().Request!.Scenarios);
         Assert.Contains("no longer", new OutageForm(n, "gone").Build().Error);
     }
 
@@ -31,7 +33,7 @@ public sealed class OutageTabTests
     public void Demo_outage_table_ranks_each_scenario_and_marks_overloads_and_low_voltage_in_text()
     {
         Network n = DemoNetwork.Read();
-        OutageScreeningResult r = OutageScreening.Run(n, new OutageScreeningRequest { Scenarios = n.Scenarios });
+        OutageScreeningResult r = StudyCase.Of(n).Outages(new OutageScreeningRequest { Scenarios = [] });
         TextTableSource table = OutageTables.Outages(r);
         Assert.Equal(r.Scenarios.Sum(s => s.Outages.Count), table.Rows);
         Assert.Equal(OutageTables.Cases(r).Count, table.Rows);
@@ -70,7 +72,7 @@ public sealed class OutageTabTests
     public void The_Outages_tab_shows_the_heading_and_the_ranked_table_at_80x24()
     {
         Network n = DemoNetwork.Read();
-        OutageScreeningResult r = OutageScreening.Run(n, new OutageScreeningRequest { Scenarios = n.Scenarios });
+        OutageScreeningResult r = StudyCase.Of(n).Outages(new OutageScreeningRequest { Scenarios = [] });
         var time = new VirtualTimeProvider();
         using IApplication app = Application.Create(time);
         app.Init(DriverRegistry.Names.ANSI);

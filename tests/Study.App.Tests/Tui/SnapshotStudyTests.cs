@@ -10,6 +10,7 @@ using Terminal.Gui.App;
 using Terminal.Gui.Drivers;
 using Terminal.Gui.Time;
 using Terminal.Gui.Views;
+using Study.Core.Cases;
 
 namespace Study.App.Tests.Tui;
 
@@ -31,7 +32,7 @@ public sealed class SnapshotStudyTests : IDisposable
     {
         Network original = SyntheticGrid.Generate(new SyntheticGridOptions { Buses = 20000, Seed = 1 }).Network;
         var session = EditSession.Untitled(original, temp.File("user"));
-        LoadFlowResult expected = LoadFlowCall.Solve(original, null, null, CancellationToken.None);
+        LoadFlowResult expected = StudyCase.Of(original).Solve(new SolveRequest { Scenario = null }, CancellationToken.None);
         Assert.True(expected.Converged);
 
         var time = new VirtualTimeProvider();
@@ -53,7 +54,7 @@ public sealed class SnapshotStudyTests : IDisposable
                 started.Set();
                 Assert.True(proceed.Wait(Patience), "the test never released the study");
                 Interlocked.Exchange(ref solving, 1);
-                try { return LoadFlowCall.Solve(snapshot, scenario, null, cancel); }
+                try { return StudyCase.Of(snapshot).Solve(new SolveRequest { Scenario = scenario }, cancel); }
                 finally { Interlocked.Exchange(ref solving, 0); }
             },
             result => { delivered = result; app.RequestStop(); },
@@ -104,7 +105,7 @@ public sealed class SnapshotStudyTests : IDisposable
         Assert.DoesNotContain(edited.Lines, l => l.Id == removed);
         Assert.Equal(last.PMw + 5, edited.Loads.Single(x => x.Id == last.Id).PMw);
         Assert.True(session.Dirty);
-        LoadFlowResult afterEdits = LoadFlowCall.Solve(edited, null, null, CancellationToken.None);
+        LoadFlowResult afterEdits = StudyCase.Of(edited).Solve(new SolveRequest { Scenario = null }, CancellationToken.None);
         Assert.Contains(afterEdits.Buses.Zip(expected.Buses), p => Math.Abs(p.First.VPu - p.Second.VPu) > 1e-6);
 
         // Undo walks back through every edit to the original network.

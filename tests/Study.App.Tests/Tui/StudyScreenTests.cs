@@ -12,6 +12,7 @@ using Terminal.Gui.Testing;
 using Terminal.Gui.Time;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using Study.Core.Cases;
 
 namespace Study.App.Tests.Tui;
 
@@ -41,7 +42,7 @@ public sealed class StudyScreenTests
     public void The_fault_caution_stays_at_the_top_of_the_Faults_tab_when_the_table_scrolls()
     {
         Network n = DemoNetwork.Read();
-        FaultResult r = FaultCall.Run(n, null, new FaultRequest { Kinds = FaultForm.AllKinds }, CancellationToken.None);
+        FaultResult r = StudyCase.Of(n).Fault(new FaultRequest { Kinds = FaultForm.AllKinds });
         string screen = Draw(v =>
         {
             v.FaultResult = r;
@@ -58,7 +59,7 @@ public sealed class StudyScreenTests
     public void The_tap_study_tab_shows_the_recommendation_the_table_and_the_curve_legend()
     {
         Network n = DemoNetwork.Read();
-        TapStudyResult r = TapStudy.Run(n, new TapStudyRequest { TransformerId = "CQ-T1", Scenarios = n.Scenarios });
+        TapStudyResult r = StudyCase.Of(n).Taps(new TapStudyRequest { TransformerId = "CQ-T1", Scenarios = [] });
         string screen = Draw(v =>
         {
             v.TapStudyResult = r;

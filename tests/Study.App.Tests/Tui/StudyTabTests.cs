@@ -9,6 +9,7 @@ using Study.Core.Faults;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
+using Study.Core.Cases;
 
 namespace Study.App.Tests.Tui;
 
@@ -23,10 +24,10 @@ public sealed class StudyTabTests
         Assert.Null(error);
         Assert.Null(request!.Band);
         Assert.Empty(request.WatchBuses);
-        Assert.Equal(2, request.Scenarios.Count);
+        Assert.Empty(request.Scenarios); // every scenario
 
         form.AllScenarios = false;
-        Assert.Equal("summer-night", Assert.Single(form.Build().Request!.Scenarios).Name);
+        Assert.Equal("summer-night", Assert.Single(form.Build().Request!.Scenarios));
 
         form.BandLowText = "0.97";
         Assert.Contains("both band limits", form.Build().Error);
@@ -44,7 +45,7 @@ public sealed class StudyTabTests
     {
         Network n = DemoNetwork.Read();
         var request = new TapStudyForm(n, "CQ-T1", null).Build().Request!;
-        TapStudyResult r = TapStudy.Run(n, request);
+        TapStudyResult r = StudyCase.Of(n).Taps(request);
         Assert.NotEmpty(r.Recommended);
         TextTableSource table = TapStudyTables.Positions(r);
         Assert.Equal(r.Max - r.Min + 1, table.Rows);
@@ -58,7 +59,7 @@ public sealed class StudyTabTests
     public void Tap_curve_shifts_positions_to_start_right_of_the_vertical_axis_and_labels_them_back()
     {
         Network n = DemoNetwork.Read();
-        TapStudyResult r = TapStudy.Run(n, new TapStudyRequest { TransformerId = "CQ-T1", Scenarios = n.Scenarios });
+        TapStudyResult r = StudyCase.Of(n).Taps(new TapStudyRequest { TransformerId = "CQ-T1", Scenarios = [] });
         TapCurve curve = TapCurve.From(r);
         Assert.Equal(2, curve.Series.Count);
         Assert.Equal(1f, curve.XOf(r.Min));
@@ -96,7 +97,7 @@ public sealed class StudyTabTests
     public void Fault_at_the_new_11kV_board_reports_kA_and_marks_breaker_duty_in_words()
     {
         Network n = DemoNetwork.Read();
-        FaultResult r = FaultCall.Run(n, null, new FaultRequest { Buses = ["CQ11"], Kinds = FaultForm.AllKinds }, CancellationToken.None);
+        FaultResult r = StudyCase.Of(n).Fault(new FaultRequest { Buses = ["CQ11"], Kinds = FaultForm.AllKinds });
         TextTableSource levels = FaultTables.Levels(r);
         Assert.Equal(4, levels.Rows);
         Assert.Equal("CQ11", levels.RowCells[0][0]);
@@ -114,7 +115,7 @@ public sealed class StudyTabTests
     public void One_line_puts_sources_first_and_levels_by_kV_descending_with_banks_and_solved_voltages()
     {
         Network n = DemoNetwork.Read();
-        LoadFlowResult solved = LoadFlowCall.Solve(n, null, null, CancellationToken.None);
+        LoadFlowResult solved = StudyCase.Of(n).Solve(new SolveRequest { Scenario = null });
         var rows = OneLineLayout.Build(n, solved).Select(r => r.Text).ToList();
         Assert.Equal("Sources", rows[0]);
         int kv132 = rows.FindIndex(r => r.StartsWith("━━ 132 kV", StringComparison.Ordinal));
@@ -135,8 +136,8 @@ public sealed class StudyTabTests
     public void The_active_scenario_reaches_the_load_flow_and_the_status_line_names_it()
     {
         Network n = DemoNetwork.Read();
-        LoadFlowResult peak = LoadFlowCall.Solve(n, "winter-peak", null, CancellationToken.None);
-        LoadFlowResult night = LoadFlowCall.Solve(n, "summer-night", null, CancellationToken.None);
+        LoadFlowResult peak = StudyCase.Of(n).Solve(new SolveRequest { Scenario = "winter-peak" });
+        LoadFlowResult night = StudyCase.Of(n).Solve(new SolveRequest { Scenario = "summer-night" });
         Assert.Equal("summer-night", night.Scenario);
         Assert.Equal(peak.Totals.LoadMw * 0.33, night.Totals.LoadMw, 0.05 * peak.Totals.LoadMw);
         Assert.Contains("scenario summer-night", StatusLine.Summary(night, "summer-night", null));

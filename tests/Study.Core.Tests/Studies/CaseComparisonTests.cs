@@ -2,6 +2,7 @@
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
+using Study.Core.Cases;
 
 namespace Study.Core.Tests.Studies;
 
@@ -12,7 +13,7 @@ public class CaseComparisonTests
     {
         Network demo = TestNetworks.Demo;
         Scenario winter = demo.FindScenario("winter-peak")!;
-        CaseComparisonResult r = CaseComparison.Run(demo, winter, demo, winter);
+        CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(demo), winter?.Name, StudyCase.Of(demo), winter?.Name);
         Assert.True(r.BeforeConverged && r.AfterConverged);
         Assert.Equal(demo.Buses.Count, r.Buses.Count);
         Assert.All(r.Buses, b => Assert.Equal(CaseMembership.Both, b.Membership));
@@ -28,7 +29,7 @@ public class CaseComparisonTests
     {
         Network before = TestNetworks.DemoBefore, after = TestNetworks.Demo;
         Scenario winter = before.FindScenario("winter-peak")!;
-        CaseComparisonResult r = CaseComparison.Run(before, winter, after, after.FindScenario("winter-peak"));
+        CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(before), winter?.Name, StudyCase.Of(after), "winter-peak");
 
         var added = r.Buses.Where(b => b.Membership == CaseMembership.Added).ToList();
         Assert.Equal(["CQ11", "CS11", "PS11"], added.Select(b => b.Id).Order());
@@ -59,7 +60,7 @@ public class CaseComparisonTests
             Transformers = n.Transformers.Select(t => t.Id is "GT1" or "GT2" ? t with { Tap = t.Tap! with { Position = -2 } } : t).ToList(),
         };
         Network before = Held(TestNetworks.DemoBefore), after = Held(TestNetworks.Demo);
-        CaseComparisonResult r = CaseComparison.Run(before, before.FindScenario("winter-peak"), after, after.FindScenario("winter-peak"),
+        CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(before), "winter-peak", StudyCase.Of(after), "winter-peak",
             LoadFlowOptions.Default with { RegulateTaps = false });
         var ring = r.Buses.Where(b => b.Kv == 33).ToList();
         Assert.Equal(4, ring.Count);
@@ -71,7 +72,7 @@ public class CaseComparisonTests
     public void Summer_night_against_winter_peak_raises_the_ring_voltages_and_cuts_the_losses()
     {
         Network demo = TestNetworks.Demo;
-        CaseComparisonResult r = CaseComparison.Run(demo, demo.FindScenario("winter-peak"), demo, demo.FindScenario("summer-night"));
+        CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(demo), "winter-peak", StudyCase.Of(demo), "summer-night");
         Assert.Equal("winter-peak", r.BeforeScenario);
         Assert.Equal("summer-night", r.AfterScenario);
         Assert.True(r.Buses.Single(b => b.Id == "CQ33").DeltaPu > 0);
@@ -84,7 +85,7 @@ public class CaseComparisonTests
     {
         Network demo = TestNetworks.Demo;
         var heavy = demo with { Scenarios = [new Scenario { Name = "impossible", LoadScale = 40 }] };
-        CaseComparisonResult r = CaseComparison.Run(demo, null, heavy, heavy.Scenarios[0]);
+        CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(demo), null, StudyCase.Of(heavy), "impossible");
         Assert.True(r.BeforeConverged);
         Assert.False(r.AfterConverged);
         Assert.NotNull(r.AfterMessage);

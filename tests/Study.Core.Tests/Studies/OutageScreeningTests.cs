@@ -3,6 +3,7 @@ using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
 using Study.Core.Units;
+using Study.Core.Cases;
 
 namespace Study.Core.Tests.Studies;
 
@@ -29,7 +30,7 @@ public class OutageScreeningTests
     [Fact]
     public void Taking_out_the_spur_islands_its_bus_and_loses_exactly_its_load()
     {
-        OutageScreeningResult r = OutageScreening.Run(TwinFeederWithSpur(20), new OutageScreeningRequest());
+        OutageScreeningResult r = StudyCase.Of(TwinFeederWithSpur(20)).Outages(new OutageScreeningRequest());
         OutageCase spur = r.Scenarios.Single().Outages.Single(o => o.Element == "B1");
         Assert.True(spur.Converged);
         Assert.Equal(["B"], spur.IslandedBuses);
@@ -41,7 +42,7 @@ public class OutageScreeningTests
     [Fact]
     public void One_twin_feeder_out_overloads_the_other_when_it_cannot_carry_the_whole_load()
     {
-        OutageCase feeder = OutageScreening.Run(TwinFeederWithSpur(10), new OutageScreeningRequest { ElementIds = ["A1"] })
+        OutageCase feeder = StudyCase.Of(TwinFeederWithSpur(10)).Outages(new OutageScreeningRequest { ElementIds = ["A1"] })
             .Scenarios.Single().Outages.Single();
         Assert.Empty(feeder.IslandedBuses);
         OutageViolation overload = Assert.Single(feeder.NewViolations, v => v.Type == ViolationKind.Overload);
@@ -58,7 +59,7 @@ public class OutageScreeningTests
     {
         // The 6.5 + 4.5 MW of loads are partly constant impedance: below 1 pu they draw a little less than 11 MW.
         Network demo = TestNetworks.Demo;
-        ScenarioScreening winter = OutageScreening.Run(demo, new OutageScreeningRequest { Scenarios = demo.Scenarios })
+        ScenarioScreening winter = StudyCase.Of(demo).Outages(new OutageScreeningRequest { Scenarios = [] })
             .Scenarios.Single(s => s.Scenario == "winter-peak");
         OutageCase bank = winter.Outages.Single(o => o.Element == "CQ-T1");
         Assert.True(bank.Converged);
@@ -74,7 +75,7 @@ public class OutageScreeningTests
     {
         Network demo = TestNetworks.Demo;
         Scenario winter = demo.FindScenario("winter-peak")!;
-        OutageCase gt1 = OutageScreening.Run(demo, new OutageScreeningRequest { ElementIds = ["GT1"], Scenarios = [winter] })
+        OutageCase gt1 = StudyCase.Of(demo).Outages(new OutageScreeningRequest { ElementIds = ["GT1"], Scenarios = [winter.Name] })
             .Scenarios.Single().Outages.Single();
 
         var without = demo with { Transformers = demo.Transformers.Select(t => t.Id == "GT1" ? t with { InService = false } : t).ToList() };
@@ -92,9 +93,9 @@ public class OutageScreeningTests
     public void Results_and_their_order_are_the_same_on_one_core_and_on_many()
     {
         Network demo = TestNetworks.Demo;
-        var request = new OutageScreeningRequest { Scenarios = demo.Scenarios };
-        OutageScreeningResult one = OutageScreening.Run(demo, request with { MaxParallelism = 1 });
-        OutageScreeningResult many = OutageScreening.Run(demo, request with { MaxParallelism = 8 });
+        var request = new OutageScreeningRequest { Scenarios = [] };
+        OutageScreeningResult one = StudyCase.Of(demo).Outages(request with { MaxParallelism = 1 });
+        OutageScreeningResult many = StudyCase.Of(demo).Outages(request with { MaxParallelism = 8 });
         static string Key(OutageScreeningResult r) => string.Join("\n", r.Scenarios.SelectMany(s => s.Outages.Select(o =>
             $"{s.Scenario} {o.Element} {o.Severity:R} {o.WorstVPu:R} {o.WorstLoadingPercent:R} {o.NewViolations.Count}")));
         Assert.Equal(Key(one), Key(many));
@@ -108,24 +109,24 @@ public class OutageScreeningTests
     {
         Network demo = TestNetworks.Demo;
         var reports = new List<double>();
-        OutageScreening.Run(demo, new OutageScreeningRequest(), progress: new Recorder(reports));
+        StudyCase.Of(demo).Outages(new OutageScreeningRequest(), new Recorder(reports));
         Assert.Equal(1.0, reports[^1], 12);
         Assert.True(reports.Zip(reports.Skip(1)).All(p => p.First < p.Second));
 
         using var cancel = new CancellationTokenSource();
         cancel.Cancel();
-        Assert.ThrowsAny<OperationCanceledException>(() => OutageScreening.Run(demo, new OutageScreeningRequest(), cancel: cancel.Token));
+        Assert.ThrowsAny<OperationCanceledException>(() => StudyCase.Of(demo).Outages(new OutageScreeningRequest(), cancel: cancel.Token));
     }
 
     [Fact]
     public void Unknown_or_out_of_service_elements_are_refused_by_name()
     {
         Network demo = TestNetworks.Demo;
-        var unknown = Assert.Throws<InputException>(() => OutageScreening.Run(demo, new OutageScreeningRequest { ElementIds = ["GT9"] }));
+        var unknown = Assert.Throws<InputException>(() => StudyCase.Of(demo).Outages(new OutageScreeningRequest { ElementIds = ["GT9"] }));
         Assert.Contains("GT9", unknown.Message);
         Assert.Contains("GT1", unknown.Message);
         var off = demo with { Lines = demo.Lines.Select(l => l.Id == "RING-1" ? l with { InService = false } : l).ToList() };
-        var already = Assert.Throws<InputException>(() => OutageScreening.Run(off, new OutageScreeningRequest { ElementIds = ["RING-1"] }));
+        var already = Assert.Throws<InputException>(() => StudyCase.Of(off).Outages(new OutageScreeningRequest { ElementIds = ["RING-1"] }));
         Assert.Contains("already out of service", already.Message);
     }
 

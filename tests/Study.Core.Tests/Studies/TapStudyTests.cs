@@ -3,6 +3,7 @@ using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
 using Study.Core.Units;
+using Study.Core.Cases;
 
 namespace Study.Core.Tests.Studies;
 
@@ -10,9 +11,9 @@ public class TapStudyTests
 {
     private static readonly (double, double) Band = (0.97, 1.03);
 
-    private static TapStudyResult NewBankStudy(Network n) => TapStudy.Run(n, new TapStudyRequest
+    private static TapStudyResult NewBankStudy(Network n) => StudyCase.Of(n).Taps( new TapStudyRequest
     {
-        TransformerId = "CQ-T1", Band = Band, Scenarios = n.Scenarios,
+        TransformerId = "CQ-T1", Band = Band, Scenarios = [],
     });
 
     [Fact]
@@ -52,9 +53,9 @@ public class TapStudyTests
     public void A_band_no_position_can_hold_gives_a_clear_statement_and_the_closest_position()
     {
         Network n = TestNetworks.Demo;
-        TapStudyResult study = TapStudy.Run(n, new TapStudyRequest
+        TapStudyResult study = StudyCase.Of(n).Taps( new TapStudyRequest
         {
-            TransformerId = "CQ-T1", Band = (0.995, 1.0), Scenarios = n.Scenarios,
+            TransformerId = "CQ-T1", Band = (0.995, 1.0), Scenarios = [],
         });
         Assert.Empty(study.Recommended);
         Assert.NotNull(study.Closest);
@@ -65,17 +66,17 @@ public class TapStudyTests
     public void Unknown_transformer_and_a_transformer_without_taps_are_input_errors()
     {
         Network n = TestNetworks.Demo;
-        var unknown = Assert.Throws<InputException>(() => TapStudy.Run(n, new TapStudyRequest { TransformerId = "NOPE" }));
+        var unknown = Assert.Throws<InputException>(() => StudyCase.Of(n).Taps( new TapStudyRequest { TransformerId = "NOPE" }));
         Assert.Contains("NOPE", unknown.Message);
         Network noTap = n with { Transformers = n.Transformers.Select(t => t.Id == "CQ-T1" ? t with { Tap = null } : t).ToList() };
-        var none = Assert.Throws<InputException>(() => TapStudy.Run(noTap, new TapStudyRequest { TransformerId = "CQ-T1" }));
+        var none = Assert.Throws<InputException>(() => StudyCase.Of(noTap).Taps( new TapStudyRequest { TransformerId = "CQ-T1" }));
         Assert.Contains("no tap changer", none.Message);
     }
 
     [Fact]
     public void An_empty_band_is_refused()
     {
-        var e = Assert.Throws<InputException>(() => TapStudy.Run(TestNetworks.Demo,
+        var e = Assert.Throws<InputException>(() => StudyCase.Of(TestNetworks.Demo).Taps(
             new TapStudyRequest { TransformerId = "CQ-T1", Band = (1.03, 0.97) }));
         Assert.Contains("empty", e.Message);
     }

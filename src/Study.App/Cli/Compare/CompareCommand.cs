@@ -1,6 +1,7 @@
 // `study compare BEFORE AFTER` or `study compare FILE --scenarios A,B`: bus voltages, branch flows and losses side by side.
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
+using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -28,33 +29,34 @@ public sealed class CompareCommand : Command
     {
         string beforePath = args.Positional(0, "BEFORE (a network file)");
         IReadOnlyList<string> pair = args.Values("scenarios");
-        Network before, after;
+        StudyCase before, after;
         string afterPath;
-        Scenario? beforeScenario, afterScenario;
+        string? beforeScenario, afterScenario;
         if (args.Value("scenarios") is not null)
         {
             args.ExpectPositionals(1);
             if (args.Value("scenario") is not null) throw new UsageException("give --scenario NAME or --scenarios A,B, not both");
             if (pair.Count != 2) throw new UsageException("--scenarios needs two scenario names separated by a comma, e.g. winter-peak,summer-night");
-            before = after = NetworkLoading.ReadValid(beforePath, context.Err);
+            before = after = NetworkLoading.Open(beforePath, context.Err);
             afterPath = beforePath;
-            beforeScenario = NetworkLoading.PickScenario(before, pair[0]);
-            afterScenario = NetworkLoading.PickScenario(after, pair[1]);
+            (beforeScenario, afterScenario) = (pair[0], pair[1]);
         }
         else
         {
             afterPath = args.Positional(1, "AFTER (a network file), or --scenarios A,B to compare two scenarios of one file");
             args.ExpectPositionals(2);
-            before = NetworkLoading.ReadValid(beforePath, context.Err);
-            after = NetworkLoading.ReadValid(afterPath, context.Err);
-            beforeScenario = NetworkLoading.PickScenario(before, args.Value("scenario"));
-            afterScenario = NetworkLoading.PickScenario(after, args.Value("scenario"));
+            before = NetworkLoading.Open(beforePath, context.Err);
+            after = NetworkLoading.Open(afterPath, context.Err);
+            beforeScenario = afterScenario = args.Value("scenario");
         }
 
         var options = LoadFlowOptions.Default;
-        CaseComparisonResult result = CaseComparison.Run(before, beforeScenario, after, afterScenario, options);
-        var beforeSide = new CompareSide(beforePath, before.Name, beforeScenario?.Name);
-        var afterSide = new CompareSide(afterPath, after.Name, afterScenario?.Name);
+        CaseComparisonResult result = StudyCase.Compare(before, beforeScenario, after, afterScenario, options);
+        // The names as the networks spell them, for the report's labels.
+        beforeScenario = before.Scenario(beforeScenario)?.Name;
+        afterScenario = after.Scenario(afterScenario)?.Name;
+        var beforeSide = new CompareSide(beforePath, before.Network.Name, beforeScenario);
+        var afterSide = new CompareSide(afterPath, after.Network.Name, afterScenario);
         ReportDocument report = CompareReport.Build(beforeSide, afterSide, result, options);
         bool converged = result.BeforeConverged && result.AfterConverged;
         if (converged && args.Value("csv") is string dir) CompareCsv.Write(result, dir);

@@ -2,6 +2,7 @@
 using System.Numerics;
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
+using Study.Core.Cases;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
@@ -57,24 +58,7 @@ public sealed class FaultCommand : Command
             string other => throw new UsageException($"--method is iec60909 or loadflow, got '{other}'"),
         };
         var zf = args.Pair("zf") is (double r, double x) ? new Complex(r, x) : Complex.Zero;
-        if (zf.Real < 0) throw new UsageException("--zf resistance must not be negative");
 
-        StageClock? clock = args.Has("timings") ? new StageClock() : null;
-        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
-        Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
-        PerUnitModel model = PerUnitModel.Build(network, scenario);
-        clock?.Lap("build");
-        LoadFlowResult? preFault = null;
-        if (method == FaultMethod.LoadFlow)
-        {
-            preFault = LoadFlowSolver.Solve(model, LoadFlowOptions.Default with { IncludeInternalBuses = true });
-            if (!preFault.Converged)
-            {
-                context.Err.WriteLine($"error: {path}: the pre-fault load flow did not converge: {preFault.Message}");
-                return ExitCode.NoConvergence;
-            }
-            clock?.Lap("pre-fault load flow");
-        }
         var request = new FaultRequest
         {
             Buses = buses.Count > 0 ? buses : null,
@@ -82,16 +66,28 @@ public sealed class FaultCommand : Command
             FaultImpedanceOhm = zf,
             Method = method,
             Level = args.Has("min") ? FaultLevel.Min : FaultLevel.Max,
-            PreFault = preFault,
+            Scenario = args.Value("scenario"),
         };
-        FaultResult result = FaultStudy.Run(model, request);
+        request.Validate();
+
+        StageClock? clock = args.Has("timings") ? new StageClock() : null;
+        StudyCase study = NetworkLoading.Open(path, context.Err, clock);
+        Network network = study.Network;
+        study.Model(study.Scenario(request.Scenario));
+        clock?.Lap("build");
+        FaultResult result = study.Fault(request);
+        if (!result.Completed)
+        {
+            context.Err.WriteLine($"error: {path}: {result.Failure}");
+            return ExitCode.NoConvergence;
+        }
         clock?.Lap("faults");
         bool json = args.Has("json");
         string? markdown = args.Value("markdown");
         // The readable report is built only when something shows it: --json alone never does.
         string? text = !json || markdown is not null ? FaultReport.Render(path, network, result, detail: buses.Count > 0) : null;
         if (markdown is not null)
-            ReportFiles.WriteMarkdown(markdown, FaultMarkdown.Build(path, network, result, request, scenario?.Name, text!));
+            ReportFiles.WriteMarkdown(markdown, FaultMarkdown.Build(path, network, result, request, request.Scenario, text!));
         clock?.Lap("report");
         if (json) CliJson.Write(context, FaultJson.From(result) with { Timings = clock?.ToJson() });
         else context.Out.Write(text + clock?.Render());

@@ -1,5 +1,5 @@
 // `study check FILE`: the validation report of a network, every problem at once.
-using Study.Core.Io;
+using Study.Core.Cases;
 using Study.Core.Model;
 using Study.Core.Model.Validation;
 
@@ -15,8 +15,7 @@ public sealed class CheckCommand : Command
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
         args.ExpectPositionals(1);
-        Network network = NetworkFile.Read(path);
-        ValidationReport report = NetworkValidator.Validate(network);
+        var (network, report) = NetworkCheck.Read(path);
         if (args.Has("json"))
             CliJson.Write(context, CheckJson.From(path, report));
         else

@@ -1,4 +1,5 @@
 // `study convert IN OUT`: any readable network (network file or IEEE Common Format) to a network file.
+using Study.Core.Cases;
 using Study.Core.Io;
 using Study.Core.Model;
 
@@ -18,7 +19,7 @@ public sealed class ConvertCommand : Command
         args.ExpectPositionals(2);
         if (Path.GetFullPath(input) == Path.GetFullPath(output))
             throw new UsageException("IN and OUT are the same file: choose another OUT so the original is kept");
-        Network network = NetworkFile.Read(input);
+        Network network = NetworkCheck.Read(input).Network;
         NetworkFile.Write(network, output);
         context.Out.WriteLine($"wrote {output}: {NetworkSummary.Describe(network)}");
         return ExitCode.Done;

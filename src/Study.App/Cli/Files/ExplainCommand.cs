@@ -1,5 +1,6 @@
 // `study explain FILE ID`: one element traced from its nameplate data to the per-unit values the engine uses.
 using System.Text;
+using Study.Core.Cases;
 using Study.Core.Model;
 using Study.Core.Units;
 
@@ -18,10 +19,9 @@ public sealed class ExplainCommand : Command
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
         string id = args.Positional(1, "ID (the element to explain)");
         args.ExpectPositionals(2);
-        Network network = Study.Core.Io.NetworkFile.Read(path);
-        Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
-        ElementExplanation e = Explainer.Explain(network, id, scenario);
-        context.Out.Write(Render(network, e));
+        NetworkCheck read = NetworkCheck.Read(path);
+        ElementExplanation e = read.Explain(id, args.Value("scenario"));
+        context.Out.Write(Render(read.Network, e));
         return ExitCode.Done;
     }
 

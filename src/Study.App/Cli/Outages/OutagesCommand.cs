@@ -1,6 +1,7 @@
 // `study outages FILE`: N-1 screening — each line and transformer out in turn, ranked by severity.
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
+using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -31,15 +32,18 @@ public sealed class OutagesCommand : Command
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
             throw new UsageException("give --scenario NAME or --all-scenarios, not both");
 
-        Network network = NetworkLoading.ReadValid(path, context.Err);
-        IReadOnlyList<Scenario> scenarios = args.Value("scenario") is string name
-            ? [NetworkLoading.PickScenario(network, name)!]
-            : network.Scenarios;
-        var request = new OutageScreeningRequest { ElementIds = args.Values("elements"), Scenarios = scenarios };
+        var request = new OutageScreeningRequest
+        {
+            ElementIds = args.Values("elements"),
+            Scenarios = args.Value("scenario") is string name ? [name] : [],
+        };
+        request.Validate();
+        StudyCase study = NetworkLoading.Open(path, context.Err);
+        Network network = study.Network;
         var options = LoadFlowOptions.Default;
         OutageScreeningResult result;
         using (TerminalProgress? progress = TerminalProgress.ForTerminal(context.Err, "outages"))
-            result = OutageScreening.Run(network, request, options, progress);
+            result = study.Outages(request, progress);
 
         if (args.Value("csv") is string dir) OutageCsv.Write(result, dir);
         ReportDocument report = OutageReport.Build(path, network, result, options);

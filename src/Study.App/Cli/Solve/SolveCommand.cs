@@ -1,10 +1,9 @@
 // `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape of DESIGN.md.
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
-using Study.Core.Io;
+using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
-using Study.Core.Units;
 
 namespace Study.App.Cli.Solve;
 
@@ -42,15 +41,15 @@ public sealed class SolveCommand : Command
             RegulateTaps = !args.Has("fixed-taps"),
             CaptureJacobian = args.Value("export-jacobian") is not null,
         };
-        if (!(options.TolerancePu > 0)) throw new UsageException("--tolerance must be positive");
-        if (options.MaxIterations < 1) throw new UsageException("--max-iterations must be at least 1");
+        var request = new SolveRequest { Scenario = args.Value("scenario"), Options = options };
+        request.Validate();
 
         StageClock? clock = args.Has("timings") ? new StageClock() : null;
-        Network network = NetworkLoading.ReadValid(path, context.Err, clock);
-        Scenario? scenario = NetworkLoading.PickScenario(network, args.Value("scenario"));
-        PerUnitModel model = PerUnitModel.Build(network, scenario);
+        StudyCase study = NetworkLoading.Open(path, context.Err, clock);
+        Network network = study.Network;
+        study.Model(study.Scenario(request.Scenario));
         clock?.Lap("build");
-        LoadFlowResult result = LoadFlowSolver.Solve(model, options);
+        LoadFlowResult result = study.Solve(request);
         clock?.Lap("solve");
         if (clock is not null && result.Timings is LoadFlowTimings t)
         {
@@ -60,7 +59,7 @@ public sealed class SolveCommand : Command
             clock.Detail("solve.factor", t.FactorMs);
             clock.Detail("solve.substitution", t.SolveMs);
         }
-        var comparison = PublishedComparison.Compare(network, result);
+        var comparison = study.CompareWithPublished(result);
 
         if (args.Value("export-jacobian") is string jacobianPath && result.Jacobian is not null)
             MatrixMarket.Write(result.Jacobian, jacobianPath,

@@ -1,6 +1,7 @@
 // `study taps FILE --transformer ID`: every tap position in every scenario, and the positions that hold the band.
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
+using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -33,24 +34,21 @@ public sealed class TapsCommand : Command
         args.ExpectPositionals(1);
         string transformer = args.Value("transformer") ?? throw new UsageException("--transformer ID is required");
         var band = args.Pair("band");
-        if (band is { } b && !(b.A < b.B)) throw new UsageException($"--band {b.A},{b.B}: LO must be below HI");
-        if (band is { } c && (c.A <= 0 || c.B > 2)) throw new UsageException("--band is in per unit, e.g. 0.97,1.03");
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
             throw new UsageException("give --scenario NAME or --all-scenarios, not both");
-
-        Network network = NetworkLoading.ReadValid(path, context.Err);
-        IReadOnlyList<Scenario> scenarios = args.Value("scenario") is string name
-            ? [NetworkLoading.PickScenario(network, name)!]
-            : network.Scenarios;
         var request = new TapStudyRequest
         {
             TransformerId = transformer,
             WatchBuses = args.Values("watch"),
             Band = band is { } x ? (x.A, x.B) : null,
-            Scenarios = scenarios,
+            Scenarios = args.Value("scenario") is string name ? [name] : [],
             HoldOtherTaps = args.Has("hold-other-taps"),
         };
-        TapStudyResult result = TapStudy.Run(network, request, LoadFlowOptions.Default);
+        request.Validate();
+
+        StudyCase study = NetworkLoading.Open(path, context.Err);
+        Network network = study.Network;
+        TapStudyResult result = study.Taps(request);
         var report = TapStudyReport.Build(path, network, result, LoadFlowOptions.Default);
         if (args.Value("csv") is string dir) TapStudyCsv.Write(result, dir);
         if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);

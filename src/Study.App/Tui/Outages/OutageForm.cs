@@ -19,8 +19,8 @@ public sealed class OutageForm(Network network, string? activeScenario)
     {
         if (activeScenario is not null && network.FindScenario(activeScenario) is null && !AllScenarios)
             return (null, $"scenario '{activeScenario}' is no longer in the network: choose another (Alt+N) or all scenarios");
-        IReadOnlyList<Scenario> scenarios = AllScenarios ? network.Scenarios
-            : activeScenario is null ? [] : [network.FindScenario(activeScenario)!];
+        // Empty means every scenario; a null name is the loads as entered.
+        IReadOnlyList<string?> scenarios = AllScenarios ? [] : [activeScenario];
         return (new OutageScreeningRequest { Scenarios = scenarios }, null);
     }
 }

@@ -1,6 +1,7 @@
 // What each command does on the main screen: edits through the session, studies through the runner.
 using Study.App.Tui.Editing;
 using Study.App.Tui.LoadFlow;
+using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Terminal.Gui.App;
@@ -115,7 +116,9 @@ public sealed class MainCommands(MainWindow main)
         Network snapshot = Session.Network;
         string? scenario = Session.ActiveScenario;
         LoadFlowResult? warm = main.LastResult is { Converged: true } last && last.Scenario == scenario ? last : null;
-        main.Runner.Start("Load flow", cancel => LoadFlowCall.Solve(snapshot, scenario, warm, cancel),
+        string? path = Session.Path;
+        var request = new SolveRequest { Scenario = scenario, Options = LoadFlowOptions.Default with { WarmStart = warm } };
+        main.Runner.Start("Load flow", cancel => StudyCase.Of(snapshot, path).Solve(request, cancel),
             result =>
             {
                 main.ShowResult(result);

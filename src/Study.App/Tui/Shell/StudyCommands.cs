@@ -3,6 +3,7 @@ using Study.App.Tui.Editing;
 using Study.App.Tui.Faults;
 using Study.App.Tui.Outages;
 using Study.App.Tui.Taps;
+using Study.Core.Cases;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
@@ -23,10 +24,16 @@ public sealed class StudyCommands(MainWindow main)
         var form = new FaultForm(bus);
         if (!FaultDialog.Run(App, form) || form.Build().Request is not { } request) return;
         Network snapshot = Session.Network;
-        string? scenario = Session.ActiveScenario;
-        main.Runner.Start("Fault study", cancel => FaultCall.Run(snapshot, scenario, request, cancel),
+        string? path = Session.Path;
+        request = request with { Scenario = Session.ActiveScenario };
+        main.Runner.Start("Fault study", cancel => StudyCase.Of(snapshot, path).Fault(request, cancel),
             result =>
             {
+                if (result.Failure is { } failure)
+                {
+                    Prompts.Tell(App, "Fault study", "Fault study not run: " + failure + "\n\n" + FaultStudy.Caution);
+                    return;
+                }
                 main.Results.FaultResult = result;
                 main.ShowStudyTab(main.Results.FaultsTab);
             },
@@ -41,7 +48,8 @@ public sealed class StudyCommands(MainWindow main)
         Network snapshot = Session.Network;
         double fraction = 0;
         var progress = new Progress<double>(f => fraction = f);
-        main.Runner.Start("Tap study", cancel => Study.Core.Studies.TapStudy.Run(snapshot, request, LoadFlowOptions.Default, progress, cancel),
+        string? path = Session.Path;
+        main.Runner.Start("Tap study", cancel => StudyCase.Of(snapshot, path).Taps(request, progress, cancel),
             result =>
             {
                 main.Results.TapStudyResult = result;
@@ -59,7 +67,8 @@ public sealed class StudyCommands(MainWindow main)
         Network snapshot = Session.Network;
         double fraction = 0;
         var progress = new Progress<double>(f => fraction = f);
-        main.Runner.Start("Outage screening", cancel => OutageScreening.Run(snapshot, request, LoadFlowOptions.Default, progress, cancel),
+        string? path = Session.Path;
+        main.Runner.Start("Outage screening", cancel => StudyCase.Of(snapshot, path).Outages(request, progress, cancel),
             result =>
             {
                 main.Results.OutageResult = result;

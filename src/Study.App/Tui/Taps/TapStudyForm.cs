@@ -1,7 +1,6 @@
 // What the tap-study dialog asks, as plain texts, and the engine request they make.
 using System.Globalization;
 using Study.App.Tui.Editing;
-using Study.Core.Io.CommonFormat;
 using Study.Core.Model;
 using Study.Core.Studies;
 
@@ -31,16 +30,24 @@ public sealed class TapStudyForm(Network network, string transformerId, string? 
         if (lowGiven != highGiven) return (null, "give both band limits, or leave both blank for each bus's own vMin–vMax");
         if (lowGiven)
         {
-            if (!TryPu(BandLowText, out double lo) || !TryPu(BandHighText, out double hi)) return (null, "band limits are per unit, e.g. 0.97 and 1.03");
-            if (!(lo < hi)) return (null, $"the band {Field.Format(lo)}–{Field.Format(hi)} is empty: low must be below high");
+            if (!TryNumber(BandLowText, out double lo) || !TryNumber(BandHighText, out double hi)) return (null, "band limits are per unit, e.g. 0.97 and 1.03");
             band = (lo, hi);
         }
         string[] watch = WatchText.Split([',', ' ', ';'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         foreach (string bus in watch)
             if (network.FindBus(bus) is null) return (null, $"watched bus {bus} is not in the network");
-        IReadOnlyList<Scenario> scenarios = AllScenarios ? network.Scenarios
-            : activeScenario is not null && network.FindScenario(activeScenario) is { } s ? [s] : [];
-        return (new TapStudyRequest { TransformerId = TransformerId, WatchBuses = watch, Band = band, Scenarios = scenarios }, null);
+        // Empty means every scenario; a null name is the loads as entered.
+        IReadOnlyList<string?> scenarios = AllScenarios ? [] : [activeScenario];
+        var request = new TapStudyRequest { TransformerId = TransformerId, WatchBuses = watch, Band = band, Scenarios = scenarios };
+        try
+        {
+            request.Validate();
+        }
+        catch (InputException e)
+        {
+            return (null, e.Message);
+        }
+        return (request, null);
     }
 
     /// <summary>Transformers (two- and three-winding) that have a tap changer with a range to study.</summary>
@@ -49,6 +56,6 @@ public sealed class TapStudyForm(Network network, string transformerId, string? 
             .Concat(network.ThreeWindingTransformers.Where(t => t.Tap is { } tap && tap.Max > tap.Min).Select(t => t.Id))
             .ToList();
 
-    private static bool TryPu(string text, out double v) =>
-        double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out v) && v > 0 && v < 2;
+    private static bool TryNumber(string text, out double v) =>
+        double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out v);
 }
