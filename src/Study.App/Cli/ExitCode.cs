@@ -1,4 +1,4 @@
-// Process exit codes of the study command (DESIGN.md, Command line).
+// Process exit codes of the study command (README, Commands).
 namespace Study.App.Cli;
 
 public static class ExitCode

@@ -7,7 +7,7 @@ namespace Study.Core.Faults;
 /// Duty = max(I''k / interruptingKa, i_p / peakKa) over the fault types studied at the breaker's bus
 /// (a planning screen in the spirit of IEC 62271-100 rated breaking and making currents; the
 /// breaking duty here uses I''k, which is conservative against the decayed breaking current I_b).
-/// Warned above 90 %, flagged above 100 % (DESIGN.md, Faults).
+/// Warned above 90 %, flagged above 100 % (DEVELOPERS.md, Algorithms).
 /// </summary>
 public static class BreakerDutyCheck
 {

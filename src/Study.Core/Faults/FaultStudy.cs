@@ -13,7 +13,7 @@ namespace Study.Core.Faults;
 /// </summary>
 public static class FaultStudy
 {
-    /// <summary>The caution every fault output carries (DESIGN.md, Faults), shown alike by the CLI and the TUI.</summary>
+    /// <summary>The caution every fault output carries (DEVELOPERS.md, Algorithms), shown alike by the CLI and the TUI.</summary>
     public const string Caution =
         "fault levels, equipment duty and protection settings from this program are planning estimates; they must be "
         + "confirmed by a licensed protection engineer against the governing local code and the utility's data before "

@@ -7,7 +7,7 @@ using Study.Core.Model;
 namespace Study.Core.Io;
 
 /// <summary>
-/// Maps the cards of a Common Format case onto the model (DESIGN.md, Imported cases): buses keep their
+/// Maps the cards of a Common Format case onto the model (README, Network files): buses keep their
 /// numbers as ids, loads and shunts become elements of their own, bus types 2 and 3 become generators,
 /// branches stay in system per unit. Every problem is an <see cref="InputException"/> at line and column.
 /// </summary>
@@ -104,7 +104,7 @@ public static class CommonFormatReader
     /// <summary>
     /// Type 3 is the slack and type 2 a PV generator even at 0 MW (synchronous condensers); a type 0
     /// or 1 bus with generation holds it as a PQ generator. Mvar limits 0 and 0 mean "none stated"
-    /// (DESIGN.md); for type 1 those columns are voltage limits, so a PQ generator has none.
+    /// (README, Network files); for type 1 those columns are voltage limits, so a PQ generator has none.
     /// </summary>
     private static Generator? GeneratorAt(BusCard card, string busId)
     {

@@ -1,4 +1,4 @@
-// Options of a load-flow solve, with the defaults DESIGN.md states.
+// Options of a load-flow solve, and their defaults.
 namespace Study.Core.LoadFlow;
 
 public sealed record LoadFlowOptions

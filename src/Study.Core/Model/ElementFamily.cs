@@ -1,4 +1,4 @@
-// The families within which element ids must be unique (DESIGN.md, network file).
+// The families within which element ids must be unique (README, Network files).
 namespace Study.Core.Model;
 
 /// <summary>Id namespaces: ids are unique within a family.</summary>

@@ -7,7 +7,7 @@ namespace Study.Core.Units;
 /// <summary>Base quantities of one bus; the ohm and ampere bases are null when the kV is not stated.</summary>
 public sealed record BusBaseResult(double BaseKv, double? ZBaseOhm, double? IBaseA, IReadOnlyList<DerivationStep> Steps);
 
-/// <summary>Per-unit bases (DESIGN.md, per-unit conventions): Z_base = kV² / MVA, I_base = MVA / (√3 · kV).</summary>
+/// <summary>Per-unit bases (DEVELOPERS.md, Per-unit rules): Z_base = kV² / MVA, I_base = MVA / (√3 · kV).</summary>
 public static class BaseQuantities
 {
     public static double ZBaseOhm(double kv, double baseMva) => kv * kv / baseMva;

@@ -30,7 +30,7 @@ public static class GeneratorConversion
         double q = d.Step("Q", $"qMvar / S_base = {N(g.QMvar)} / {N(baseMva)}", g.QMvar / baseMva, "pu");
         double vSet = d.Step("V_set", "vSet given", g.VSet, "pu");
 
-        // Q limits of 0 and 0 mean "no limits stated" (DESIGN.md, imported cases).
+        // Q limits of 0 and 0 mean "no limits stated" (README, Network files).
         bool noLimits = g.QMinMvar is null or 0 && g.QMaxMvar is null or 0;
         double? qMin = noLimits || g.QMinMvar is null ? null
             : d.Step("Q_min", $"qMinMvar / S_base = {N(g.QMinMvar.Value)} / {N(baseMva)}", g.QMinMvar.Value / baseMva, "pu");

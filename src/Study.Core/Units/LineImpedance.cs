@@ -22,7 +22,7 @@ public sealed record LineImpedanceResult(
 
 /// <summary>
 /// Z_pu = Z_ohm / Z_base and B_pu = B_siemens · Z_base, Z_base from the from-bus kV
-/// (DESIGN.md, per-unit conventions; common practice). Exactly one data form per line.
+/// (DEVELOPERS.md, Per-unit rules; common practice). Exactly one data form per line.
 /// </summary>
 public static class LineImpedance
 {

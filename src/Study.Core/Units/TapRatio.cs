@@ -6,7 +6,7 @@ namespace Study.Core.Units;
 
 /// <summary>
 /// t = (hvKv · f_hv / kV_hv bus) / (lvKv · f_lv / kV_lv bus), f = 1 + (position − neutral) · step / 100
-/// on the tapped winding and 1 on the other (DESIGN.md, per-unit conventions). The same formula as
+/// on the tapped winding and 1 on the other (DEVELOPERS.md, Per-unit rules). The same formula as
 /// <see cref="PuTap.RatioAt"/>, which the builder checks by constructing the tap from these factors.
 /// </summary>
 internal static class TapRatio

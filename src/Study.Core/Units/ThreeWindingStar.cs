@@ -20,7 +20,7 @@ public sealed record ThreeWindingStarResult(
 }
 
 /// <summary>
-/// Star from pairwise impedances (common practice; DESIGN.md): Z_H = (Z_HM + Z_HL − Z_ML)/2,
+/// Star from pairwise impedances (common practice; DEVELOPERS.md, Per-unit rules): Z_H = (Z_HM + Z_HL − Z_ML)/2,
 /// Z_M = (Z_HM + Z_ML − Z_HL)/2, Z_L = (Z_HL + Z_ML − Z_HM)/2, all on zBaseMva with one X/R.
 /// </summary>
 public static class ThreeWindingStar

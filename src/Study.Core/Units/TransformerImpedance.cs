@@ -38,7 +38,7 @@ public sealed record TransformerImpedanceResult
 /// <summary>
 /// z = zPercent/100 on the unit's own MVA, r = z/√(1 + (X/R)²), x = r·X/R, then
 /// z_sys = z · (S_base / (S_r · units)) · (lvKv / kV_lv bus)² (base change, common practice;
-/// DESIGN.md, per-unit conventions). The series impedance sits on the lv side of the ideal ratio,
+/// DEVELOPERS.md, Per-unit rules). The series impedance sits on the lv side of the ideal ratio,
 /// so it is referred to the lv winding and the lv bus base.
 /// </summary>
 public static class TransformerImpedance

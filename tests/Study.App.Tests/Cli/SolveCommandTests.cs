@@ -20,7 +20,7 @@ public class SolveCommandTests
         JsonElement branch = root.GetProperty("branches")[0];
         foreach (string key in new[] { "id", "kind", "from", "to", "pFromMw", "qFromMvar", "pToMw", "qToMvar", "iFromA", "lossMw", "lossMvar", "loadingPercent" })
             Assert.True(branch.TryGetProperty(key, out _), key);
-        // Published solution of the IEEE 14 bus case (CHECKS.md): bus 1 at 1.060 pu, bus 14 at 1.036 pu.
+        // Published solution of the IEEE 14 bus case (DEVELOPERS.md, Outside references): bus 1 at 1.060 pu, bus 14 at 1.036 pu.
         Assert.Equal(1.060, root.GetProperty("buses")[0].GetProperty("vPu").GetDouble(), 3);
         Assert.InRange(root.GetProperty("buses")[13].GetProperty("vPu").GetDouble(), 1.034, 1.038);
         Assert.True(root.GetProperty("published").GetProperty("maxVoltageDifferencePu").GetDouble() < 0.002);

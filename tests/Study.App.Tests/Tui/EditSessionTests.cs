@@ -40,7 +40,7 @@ public sealed class EditSessionTests : IDisposable
     public void An_id_already_used_in_the_family_is_refused()
     {
         EditSession s = SavedSession(out _);
-        // Loads and shunts share one id family (DESIGN.md).
+        // Loads and shunts share one id family (README, Network files).
         Assert.Throws<ArgumentException>(() => s.Add(ElementKind.Shunt, new Shunt { Id = "L1", Bus = "B11" }));
     }
 

@@ -7,7 +7,7 @@ namespace Study.Core.Tests.Faults;
 
 public class HandWorkedExampleTests
 {
-    // Common practice (CHECKS.md, transformer-limited fault): infinite source, I_fault = I_rated / z_pu.
+    // Common practice (common practice; DEVELOPERS.md, Outside references): infinite source, I_fault = I_rated / z_pu.
     // 20 MVA, 11 kV secondary, z = 10 %: I_rated = 20 / (√3 · 11) = 1049.7 A, I_fault = 10.50 kA at c = 1.
     // The load-flow method drives the fault from the solved 1.0 pu with no c factor.
     [Fact]
@@ -18,7 +18,7 @@ public class HandWorkedExampleTests
         Assert.Equal(10.50, result.At("LV", FaultKind.ThreePhase).IkKa!.Value, 2);
     }
 
-    // IEC 60909-0:2016 equivalent voltage source (CHECKS.md; formulas from memory), a radial network
+    // IEC 60909-0:2016 equivalent voltage source (formulas from memory; DEVELOPERS.md, Outside references), a radial network
     // worked by hand. Grid 132 kV, S''kQ = 3000 MVA, X/R = 12; bank 132/33 kV, 30 MVA, 10 %, X/R 20,
     // z0 9 %, Dyn11 with its 33 kV star solidly earthed; cable 5 km of 0.1 + j0.12 ohm/km (zero
     // sequence 0.4 + j0.3 ohm/km). c = c_max = 1.10 at both levels. All ohm at 33 kV:

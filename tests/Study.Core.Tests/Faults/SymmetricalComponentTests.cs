@@ -10,7 +10,7 @@ public class SymmetricalComponentTests
 {
     private static readonly Complex Z = new(0.02, 0.3);
 
-    // Symmetrical components (Fortescue; CHECKS.md): with Z0 = Z1 = Z2 an earth fault equals the three-phase fault.
+    // Symmetrical components (Fortescue; DEVELOPERS.md, Outside references): with Z0 = Z1 = Z2 an earth fault equals the three-phase fault.
     [Fact]
     public void Equal_sequence_impedances_make_the_earth_fault_equal_the_three_phase_fault()
     {
@@ -20,7 +20,7 @@ public class SymmetricalComponentTests
         Assert.Equal(three.LargestPhaseMagnitude, (3 * earth.Zero).Magnitude, 12);
     }
 
-    // Fortescue (CHECKS.md): with Z2 = Z1, I_ll = (√3/2)·I_3ph.
+    // Fortescue (DEVELOPERS.md, Outside references): with Z2 = Z1, I_ll = (√3/2)·I_3ph.
     [Fact]
     public void Line_to_line_fault_is_root_three_over_two_of_the_three_phase_fault()
     {
@@ -30,7 +30,7 @@ public class SymmetricalComponentTests
         Assert.Equal(0, ll.PhaseA.Magnitude, 12);
     }
 
-    // Fortescue (CHECKS.md): I_slg = 3E/|Z1 + Z2 + Z0 + 3Zf|, and a fault impedance lowers the current.
+    // Fortescue (DEVELOPERS.md, Outside references): I_slg = 3E/|Z1 + Z2 + Z0 + 3Zf|, and a fault impedance lowers the current.
     [Fact]
     public void Earth_fault_with_fault_impedance_follows_the_textbook_formula()
     {

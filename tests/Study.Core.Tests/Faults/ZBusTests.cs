@@ -8,7 +8,7 @@ namespace Study.Core.Tests.Faults;
 
 public class ZBusTests
 {
-    // CHECKS.md, general-purpose reference libraries: MathNet.Numerics dense linear algebra as the reference.
+    // DEVELOPERS.md, Outside references: MathNet.Numerics dense linear algebra as the reference.
     // The IEEE 14-bus case (University of Washington archive) carries no machine data: x''d = 0.25 pu
     // on 100 MVA is ASSUMED for every generator here, not published data.
     [Fact]

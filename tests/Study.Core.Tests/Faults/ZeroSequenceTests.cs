@@ -9,7 +9,7 @@ public class ZeroSequenceTests
 {
     private static readonly FaultRequest Earth = new() { Kinds = [FaultKind.ThreePhase, FaultKind.LineToEarth] };
 
-    // CHECKS.md, zero sequence through transformers: an earth fault on the delta side of a YNd unit
+    // Zero sequence through transformers (common practice, any protection text; DEVELOPERS.md, Outside references): an earth fault on the delta side of a YNd unit
     // with no other earthing draws no earth-fault current (only charging).
     [Fact]
     public void Earth_fault_on_the_delta_side_of_a_YNd_unit_draws_no_current()
@@ -46,7 +46,7 @@ public class ZeroSequenceTests
         Assert.True(slg.IkKa < 0.01 * result.At("LV", FaultKind.ThreePhase).IkKa);
     }
 
-    // CHECKS.md: a Dyn unit with a solidly earthed star feeds an lv earth fault roughly equal to its
+    // DEVELOPERS.md, Outside references: a Dyn unit with a solidly earthed star feeds an lv earth fault roughly equal to its
     // three-phase fault when Z0 ≈ Z1 of the unit (infinite source).
     [Fact]
     public void Dyn_unit_with_solid_star_feeds_an_earth_fault_equal_to_its_three_phase_fault()

@@ -1,4 +1,4 @@
-// Load flow against the published IEEE test cases (CHECKS.md, "Published test cases"): IEEE Common
+// Load flow against the published IEEE test cases (DEVELOPERS.md, Outside references): IEEE Common
 // Format files from the University of Washington archive (1993), systems from 1961–62, each with
 // its own published solution.
 using Study.Core.LoadFlow;
@@ -15,7 +15,7 @@ public class PublishedCaseTests(ITestOutputHelper output)
     [Fact]
     public void Ieee14_matches_the_published_voltages_and_angles()
     {
-        // Tolerance 0.002 pu and 0.05 deg (CHECKS.md; bus 4 sits ≈0.0013 pu from the rounded file value).
+        // Tolerance 0.002 pu and 0.05 deg (DEVELOPERS.md, Outside references; bus 4 sits ≈0.0013 pu from the rounded file value).
         Network n = TestNetworks.Ieee14;
         LoadFlowResult r = Solve(n);
         Assert.True(r.Converged, r.Message);
@@ -31,7 +31,7 @@ public class PublishedCaseTests(ITestOutputHelper output)
     [Fact]
     public void Ieee14_slack_power_and_losses_match_the_published_case()
     {
-        // Slack P = 232.4 MW ± 0.2; losses 13.39 ± 0.05 MW = generation 272.4 − load 259.0 (CHECKS.md).
+        // Slack P = 232.4 MW ± 0.2; losses 13.39 ± 0.05 MW = generation 272.4 − load 259.0 (DEVELOPERS.md, Outside references).
         LoadFlowResult r = Solve(TestNetworks.Ieee14);
         Assert.InRange(r.Buses.Single(b => b.Id == "1").PGenMw, 232.2, 232.6);
         Assert.InRange(r.Totals.LossMw, 13.34, 13.44);
@@ -45,7 +45,7 @@ public class PublishedCaseTests(ITestOutputHelper output)
     [InlineData("8", 17.4)]
     public void Ieee14_generator_reactive_power_matches_within_2_mvar(string bus, double publishedMvar)
     {
-        // CHECKS.md: the file's Q values are rounded from an older solution, hence 2 Mvar.
+        // DEVELOPERS.md, Outside references: the file's Q values are rounded from an older solution, hence 2 Mvar.
         LoadFlowResult r = Solve(TestNetworks.Ieee14);
         Assert.InRange(r.Buses.Single(b => b.Id == bus).QGenMvar, publishedMvar - 2, publishedMvar + 2);
     }

@@ -1,4 +1,4 @@
-// Three-winding banks in the load flow through the star equivalent (common practice; DESIGN.md).
+// Three-winding banks in the load flow through the star equivalent (common practice; DEVELOPERS.md, Per-unit rules).
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Units;

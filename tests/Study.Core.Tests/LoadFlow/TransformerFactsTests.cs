@@ -1,4 +1,4 @@
-// Facts of the trade that any load flow must reproduce (CHECKS.md, "Standards and handbook formulas").
+// Facts of the trade that any load flow must reproduce (DEVELOPERS.md, Outside references).
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Units;

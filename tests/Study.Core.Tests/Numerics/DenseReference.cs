@@ -1,5 +1,5 @@
 // The reference the sparse LU is held against: MathNet.Numerics dense LU
-// (CHECKS.md, general-purpose reference libraries).
+// (DEVELOPERS.md, Outside references).
 using MathNet.Numerics.LinearAlgebra;
 using Complex = System.Numerics.Complex;
 // Aliases keep MathNet's Vector<T> apart from System.Numerics.Vector<T>.

@@ -6,7 +6,7 @@ namespace Study.Core.Tests.Numerics;
 
 public class InverseEntriesTests
 {
-    // Reference: MathNet.Numerics dense inverse (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense inverse (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(8, 1, false)]
     [InlineData(40, 2, true)]
@@ -20,7 +20,7 @@ public class InverseEntriesTests
         AssertEveryColumn(lu, n, (r, c) => inverse[r, c]);
     }
 
-    // Reference: MathNet.Numerics dense inverse (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense inverse (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(30, 4, true)]
     [InlineData(120, 5, false)]
@@ -33,7 +33,7 @@ public class InverseEntriesTests
         AssertEveryColumn(lu, n, (r, c) => inverse[r, c]);
     }
 
-    // Reference: MathNet.Numerics dense inverse (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense inverse (DEVELOPERS.md, Outside references).
     [Fact]
     public void Grid_admittance_diagonal_after_refactor_matches_MathNet_dense_inverse()
     {

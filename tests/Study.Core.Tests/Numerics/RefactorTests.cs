@@ -30,7 +30,7 @@ public class RefactorTests
         Assert.Equal(1, lu.ValueRefactorisations);
         Assert.Equal(1, lu.PivotingFactorisations);
         Assert.True(TestMatrices.RelativeDifference<double>(x, y) < 1e-10);
-        // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+        // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
         Assert.True(TestMatrices.RelativeDifference<double>(x, DenseReference.Solve(TestMatrices.ToDense(second), b)) < 1e-10);
     }
 
@@ -63,7 +63,7 @@ public class RefactorTests
         lu.Solve(b);
 
         Assert.Equal(1, lu.ValueRefactorisations);
-        // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+        // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
         Assert.True(TestMatrices.RelativeDifference<Complex>(b, expected) < 1e-10);
     }
 
@@ -86,7 +86,7 @@ public class RefactorTests
         }
         var second = new CscMatrix<double>(n, n, first.ColPtr, first.RowIdx, values);
         var b = TestMatrices.RandomReal(n, 10);
-        // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+        // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
         var expected = DenseReference.Solve(TestMatrices.ToDense(second), b);
 
         lu.Refactor(second);

@@ -6,7 +6,7 @@ namespace Study.Core.Tests.Numerics;
 
 public class SparseLuComplexTests
 {
-    // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(10, 1, true)]
     [InlineData(50, 2, false)]
@@ -25,7 +25,7 @@ public class SparseLuComplexTests
         Assert.True(TestMatrices.RelativeDifference<Complex>(b, expected) < 1e-10);
     }
 
-    // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(6, 1)]
     [InlineData(16, 2)]
@@ -42,7 +42,7 @@ public class SparseLuComplexTests
         Assert.True(TestMatrices.RelativeDifference<Complex>(currents, expected) < 1e-10);
     }
 
-    // Reference: MathNet.Numerics dense LU of Aᵀ (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU of Aᵀ (DEVELOPERS.md, Outside references).
     [Fact]
     public void Complex_transposed_solution_matches_MathNet_dense_LU_of_the_transpose()
     {

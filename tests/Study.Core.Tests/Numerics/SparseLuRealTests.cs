@@ -5,7 +5,7 @@ namespace Study.Core.Tests.Numerics;
 
 public class SparseLuRealTests
 {
-    // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(10, 1, false)]
     [InlineData(10, 2, true)]
@@ -29,7 +29,7 @@ public class SparseLuRealTests
         Assert.True(TestMatrices.RelativeDifference<double>(x, expected) < 1e-10);
     }
 
-    // Reference: MathNet.Numerics dense LU (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(30, 11)]
     [InlineData(150, 12)]
@@ -46,7 +46,7 @@ public class SparseLuRealTests
         Assert.True(TestMatrices.RelativeDifference<double>(b, expected) < 1e-10);
     }
 
-    // Reference: MathNet.Numerics dense LU of Aᵀ (CHECKS.md, general-purpose reference libraries).
+    // Reference: MathNet.Numerics dense LU of Aᵀ (DEVELOPERS.md, Outside references).
     [Theory]
     [InlineData(25, 21)]
     [InlineData(250, 22)]

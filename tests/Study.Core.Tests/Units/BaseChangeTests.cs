@@ -6,7 +6,7 @@ namespace Study.Core.Tests.Units;
 
 public class BaseChangeTests
 {
-    // CHECKS.md, per-unit base change (common practice, any power systems text):
+    // Per-unit base change (common practice, any power systems text; DEVELOPERS.md, Outside references):
     // Z_new = Z_old · (S_new / S_old) · (V_old / V_new)²; 8 % on 50 MVA is 0.16 pu on 100 MVA at the same kV.
     [Fact]
     public void Eight_percent_on_50_MVA_is_0_16_pu_on_100_MVA_at_the_same_kV()

@@ -1,4 +1,4 @@
-// Line conversion from per-km, ohm and per-unit data (DESIGN.md per-unit conventions, common practice).
+// Line conversion from per-km, ohm and per-unit data (DEVELOPERS.md, Per-unit rules; common practice).
 using System.Numerics;
 using Study.Core.Model;
 using Study.Core.Units;

@@ -79,7 +79,7 @@ public class PerUnitModelBuildTests
         Assert.Equal(["hv", "mv", "lv"], windings.Select(w => w.Winding));
         Assert.Equal([0, 1, 3], windings.Select(w => w.From));
         Assert.All(windings, w => Assert.Equal(4, w.To));
-        // The mv star branch is negative for this bank (z_M = −0.5 %): accepted with a warning (DESIGN.md).
+        // The mv star branch is negative for this bank (z_M = −0.5 %): accepted with a warning (README, Network files).
         Assert.Contains(m.Warnings, w => w.Contains("T3 (mv winding)"));
     }
 
@@ -105,7 +105,7 @@ public class PerUnitModelBuildTests
         Assert.Equal(("T1", 1, 1, 1.0, 0.015), (tap.Id, tap.Branch, tap.RegulatedBus!.Value, tap.VTarget, tap.BandPu));
     }
 
-    // Tap direction (CHECKS.md, common practice): +2 steps of 1.25 % on the hv side give t = 1.025.
+    // Tap direction (common practice; DEVELOPERS.md, Outside references): +2 steps of 1.25 % on the hv side give t = 1.025.
     [Fact]
     public void WithTapPosition_changes_only_that_branch_ratio_and_the_tap_position()
     {
@@ -122,7 +122,7 @@ public class PerUnitModelBuildTests
     }
 
     // PuTap.RatioAt must agree with the nameplate formula at every position, on either side, including
-    // a winding rated off its bus kV and a three-winding lv tap (DESIGN.md per-unit conventions).
+    // a winding rated off its bus kV and a three-winding lv tap (DEVELOPERS.md, Per-unit rules).
     [Theory]
     [InlineData(TapSide.Hv, 33.0)]
     [InlineData(TapSide.Lv, 33.0)]

@@ -6,7 +6,7 @@ namespace Study.Core.Tests.Units;
 
 public class SourceAndLoadConversionTests
 {
-    // Base change (CHECKS.md, common practice): x''d = 0.18 on 10 MVA at 11 kV is 0.18 · 100/10 = 1.8 pu
+    // Base change (common practice; DEVELOPERS.md, Outside references): x''d = 0.18 on 10 MVA at 11 kV is 0.18 · 100/10 = 1.8 pu
     // on 100 MVA at an 11 kV bus; at a 10.5 kV bus it is 1.8 · (11/10.5)².
     [Fact]
     public void Generator_reactances_change_to_the_system_base()

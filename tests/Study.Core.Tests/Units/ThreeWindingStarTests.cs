@@ -1,4 +1,4 @@
-// Three-winding transformer star equivalent (DESIGN.md formulas; common practice).
+// Three-winding transformer star equivalent (common practice; DEVELOPERS.md, Per-unit rules).
 using Study.Core.Model;
 using Study.Core.Units;
 
@@ -15,7 +15,7 @@ public class ThreeWindingStarTests
     private static ThreeWindingStarResult Convert(ThreeWindingTransformer t, double lvBusKv = 11) =>
         ThreeWindingStar.Convert(t, new Bus { Id = "H", Kv = 132 }, new Bus { Id = "M", Kv = 33 }, new Bus { Id = "L", Kv = lvBusKv }, 100);
 
-    // Star equivalent (CHECKS.md, common practice): z_H = (12 + 20 − 7)/2 = 12.5 %, z_M = (12 + 7 − 20)/2 = −0.5 %,
+    // Star equivalent (common practice; DEVELOPERS.md, Outside references): z_H = (12 + 20 − 7)/2 = 12.5 %, z_M = (12 + 7 − 20)/2 = −0.5 %,
     // z_L = (20 + 7 − 12)/2 = 7.5 % on 60 MVA; any two star branches in series give the pairwise impedance.
     [Fact]
     public void Each_pair_of_star_branches_adds_up_to_the_pairwise_impedance()
@@ -41,7 +41,7 @@ public class ThreeWindingStarTests
         Assert.Equal(1.025, tapped.Lv.Ratio, 12);
     }
 
-    // DESIGN.md ratio rule applied per winding: an 11 kV winding on a 10.5 kV bus gives t_L = 11 / 10.5.
+    // The ratio rule (DEVELOPERS.md, Per-unit rules) applied per winding: an 11 kV winding on a 10.5 kV bus gives t_L = 11 / 10.5.
     [Fact]
     public void A_winding_rated_above_its_bus_kV_raises_that_winding_ratio()
     {

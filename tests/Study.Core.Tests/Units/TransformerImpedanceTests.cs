@@ -15,7 +15,7 @@ public class TransformerImpedanceTests
         Id = "T1", Hv = "B0", Lv = "B1", Mva = 60, HvKv = 132, LvKv = 33, ZPercent = 12.5, Xr = 25, Tap = tap,
     };
 
-    // Base change (CHECKS.md, common practice): 12.5 % on 60 MVA at rated kV is
+    // Base change (common practice; DEVELOPERS.md, Outside references): 12.5 % on 60 MVA at rated kV is
     // z_sys = 0.125 · 100 / 60 = 0.2083333 pu on 100 MVA; with X/R 25,
     // r = 0.2083333 / √(1 + 25²) = 0.2083333 / 25.019992 = 0.00832667 pu, x = 25 · r = 0.2081668 pu.
     [Fact]
@@ -29,7 +29,7 @@ public class TransformerImpedanceTests
         Assert.Equal(60.0, c.RatingMva);
     }
 
-    // Tap direction (CHECKS.md, common practice): +2 steps of 1.25 % on the hv winding raise the turns
+    // Tap direction (common practice; DEVELOPERS.md, Outside references): +2 steps of 1.25 % on the hv winding raise the turns
     // ratio by 2.5 %: t = 1.025 when the bus kV equal the rated kV; on the lv winding t = 1/1.025.
     [Fact]
     public void Two_hv_tap_steps_of_1_25_percent_give_a_ratio_of_1_025()
@@ -45,7 +45,7 @@ public class TransformerImpedanceTests
         Assert.Equal(1 / 1.025, c.Ratio, 12);
     }
 
-    // DESIGN.md formulas (base change, common practice): a 33/11.5 kV, 20 MVA, 10 % unit between a 33 kV
+    // Per-unit rules (base change, common practice; DEVELOPERS.md): a 33/11.5 kV, 20 MVA, 10 % unit between a 33 kV
     // and an 11 kV bus: z_sys = 0.1 · (100/20) · (11.5/11)² = 0.5 · 1.0929752 = 0.5464876 pu and
     // t = (33/33) / (11.5/11) = 0.9565217.
     [Fact]
@@ -97,7 +97,7 @@ public class TransformerImpedanceTests
         Assert.Equal(0.11 * 100 / 60, given.Z0Pu.Magnitude, 12);
     }
 
-    // Transformer-limited fault (CHECKS.md, common practice): 20 MVA, 11 kV secondary, z = 10 %:
+    // Transformer-limited fault (common practice; DEVELOPERS.md, Outside references): 20 MVA, 11 kV secondary, z = 10 %:
     // I_rated = 20 MVA / (√3 · 11 kV) = 1049.7 A; with an infinite source I_fault = I_rated / z = 10.50 kA.
     // Through the conversion: z_sys = 0.1 · 100/20 = 0.5 pu, I_base at 11 kV = 5248.6 A, 5248.6 / 0.5 = 10.497 kA.
     [Fact]

@@ -1,4 +1,4 @@
-// The --json shape of `study compare` (DESIGN.md, JSON result shapes); null voltages mark added, removed or dead buses.
+// The --json shape of `study compare` (README, "Results as JSON"); null voltages mark added, removed or dead buses.
 using Study.App.Cli.Solve;
 using Study.Core.LoadFlow;
 using Study.Core.Studies;

@@ -1,4 +1,4 @@
-// The --json shape of `study fault` (DESIGN.md, JSON result shapes).
+// The --json shape of `study fault` (README, "Results as JSON").
 using System.Numerics;
 using Study.Core.Faults;
 

@@ -1,4 +1,4 @@
-// The --json shape of `study outages` (DESIGN.md, JSON result shapes): one object per scenario.
+// The --json shape of `study outages` (README, "Results as JSON"): one object per scenario.
 using System.Text.Json.Serialization;
 using Study.App.Cli.Solve;
 using Study.Core.Studies;

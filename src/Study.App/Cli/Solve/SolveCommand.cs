@@ -1,4 +1,4 @@
-// `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape of DESIGN.md.
+// `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape in README, "Results as JSON".
 using Study.App.Cli.Files;
 using Study.App.Cli.Reports;
 using Study.Core.Cases;

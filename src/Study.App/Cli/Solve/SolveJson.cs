@@ -1,4 +1,4 @@
-// The --json shape of `study solve` (DESIGN.md, JSON result shapes).
+// The --json shape of `study solve` (README, "Results as JSON").
 using Study.Core.LoadFlow;
 
 namespace Study.App.Cli.Solve;

@@ -1,4 +1,4 @@
-// The --json shape of `study taps` (DESIGN.md, JSON result shapes).
+// The --json shape of `study taps` (README, "Results as JSON").
 using System.Text.Json.Serialization;
 using Study.Core.Studies;
 

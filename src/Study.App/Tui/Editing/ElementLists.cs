@@ -51,7 +51,7 @@ public static class ElementLists
         return list.Items(network).FirstOrDefault(e => list.IdOf(e) == id);
     }
 
-    /// <summary>True when no element of the same family (DESIGN.md: ids are unique per family) uses the id.</summary>
+    /// <summary>True when no element of the same family (ids are unique per family: README, Network files) uses the id.</summary>
     public static bool IsIdFree(Network network, ElementKind kind, string id, string? except = null)
     {
         if (id == except) return true;

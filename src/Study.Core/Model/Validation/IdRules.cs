@@ -1,4 +1,4 @@
-// Ids: every element has one, unique within its family (DESIGN.md, network file).
+// Ids: every element has one, unique within its family (README, Network files).
 namespace Study.Core.Model.Validation;
 
 internal static class IdRules

@@ -88,7 +88,7 @@ internal static class LineRules
         }
     }
 
-    /// <summary>Ohm values need Z_base = kV²/MVA of the bus (DESIGN.md, per-unit conventions).</summary>
+    /// <summary>Ohm values need Z_base = kV²/MVA of the bus (DEVELOPERS.md, Per-unit rules).</summary>
     private static void RequireBaseKv(ElementScope at, string field, Bus? bus)
     {
         if (bus is { Kv: 0 })

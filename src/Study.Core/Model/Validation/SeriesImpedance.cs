@@ -4,7 +4,7 @@ namespace Study.Core.Model.Validation;
 internal static class SeriesImpedance
 {
     /// <summary>
-    /// Zero series impedance is an error (DESIGN.md, imported cases); negative reactance is accepted
+    /// Zero series impedance is an error (README, Network files); negative reactance is accepted
     /// with a warning, since series capacitors and three-winding star branches have it in real data.
     /// </summary>
     public static void Check(ElementScope at, string rKey, double? r, string xKey, double? x)

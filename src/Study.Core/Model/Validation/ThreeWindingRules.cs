@@ -56,7 +56,7 @@ internal static class ThreeWindingRules
     }
 
     /// <summary>
-    /// The star equivalent Z_H = (Z_HM + Z_HL − Z_ML)/2 and its two companions (DESIGN.md, per-unit
+    /// The star equivalent Z_H = (Z_HM + Z_HL − Z_ML)/2 and its two companions (DEVELOPERS.md, Per-unit
     /// conventions) can come out negative; that is real and solvable, so a warning only. A star
     /// branch of exactly zero would be a zero-impedance branch to the star point: an error.
     /// </summary>

@@ -35,7 +35,7 @@ internal static class TopologyRules
         var hasSlack = new bool[buses.Count];
         foreach (Supply? s in ValidationContext.Items(network.Supplies))
         {
-            // A supply point is a slack source (DESIGN.md, network file).
+            // A supply point is a slack source (README, Network files).
             if (s is { InService: true }) AddSource(islands, index, sources, hasSlack, s.Bus, s.Id, slack: true);
         }
         foreach (Generator? g in ValidationContext.Items(network.Generators))
