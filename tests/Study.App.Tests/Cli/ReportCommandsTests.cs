@@ -1,6 +1,6 @@
 // --markdown and --csv on solve and taps: one report, rendered as plain text on the terminal and as Markdown in a file.
 using Study.App.Cli;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 
 namespace Study.App.Tests.Cli;
 
@@ -58,9 +58,8 @@ public class ReportCommandsTests
     [Fact]
     public void Markdown_escapes_markup_in_cells_so_columns_stay_aligned()
     {
-        var table = new ReportTable().Left("id").Column("value");
-        table.Row("LD_A|B*", "1.0");
-        var doc = new ReportDocument("ids with markup").Add(table);
+        var spec = new ColumnSpec<(string Id, double Value)>().Text("id", "id", r => r.Id).Number("value", "value", null, r => r.Value, 1);
+        var doc = new ReportDocument("ids with markup").Table(spec, [("LD_A|B*", 1.0)]);
         string md = MarkdownReport.Render(doc);
         Assert.Equal([(2, 1)], ReportChecks.MarkdownTables(md));
         Assert.Contains(@"LD\_A\|B\*", md);
