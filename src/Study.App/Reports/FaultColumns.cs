@@ -25,8 +25,10 @@ public static class FaultColumns
             .Number("xOverR", "X/R", null, f => XOverR(f), 2)
             .Number("kappa", "kappa", null, f => f.Kappa, 3)
             .Number(perUnitOnly ? "ipPu" : "ipKa", "ip", current, f => f.Kv > 0 ? f.IpKa : f.IpPu, 2)
-            .Words(perUnitOnly ? "z1Pu" : "z1Ohm", "Z1", f => Impedance(f.Kv > 0 ? f.Z1Ohm : f.Z1Pu), f => Impedance(f.Kv > 0 ? f.Z1Ohm : f.Z1Pu) ?? "open", Align.Right, impedance)
-            .Words(perUnitOnly ? "z0Pu" : "z0Ohm", "Z0", f => Impedance(f.Kv > 0 ? f.Z0Ohm : f.Z0Pu), f => Impedance(f.Kv > 0 ? f.Z0Ohm : f.Z0Pu) ?? "open", Align.Right, impedance);
+            .Words(null, "Z1", _ => null, f => Impedance(Z1(f)), Align.Right, impedance)
+            .Words(null, "Z0", _ => null, f => Impedance(Z0(f)), Align.Right, impedance)
+            .CsvOnly($"z1R{Title(impedance)}", f => Z1(f)?.Real).CsvOnly($"z1X{Title(impedance)}", f => Z1(f)?.Imaginary)
+            .CsvOnly($"z0R{Title(impedance)}", f => Z0(f)?.Real).CsvOnly($"z0X{Title(impedance)}", f => Z0(f)?.Imaginary);
     }
 
     /// <summary>Phase-voltage magnitudes after one fault, in pu of each bus's base.</summary>
@@ -86,7 +88,15 @@ public static class FaultColumns
     /// <summary>X/R is unbounded when the fault impedance has no resistance (null in the result).</summary>
     private static double XOverR(ShortCircuitLevel f) => f.XOverR ?? double.PositiveInfinity;
 
-    private static string? Impedance(Complex? z) => z is Complex v
+    /// <summary>The sequence impedances in ohm where the bus states its kV, else in pu; null where the sequence network is open.</summary>
+    private static Complex? Z1(ShortCircuitLevel f) => f.Kv > 0 ? f.Z1Ohm : f.Z1Pu;
+
+    private static Complex? Z0(ShortCircuitLevel f) => f.Kv > 0 ? f.Z0Ohm : f.Z0Pu;
+
+    private static string Title(string unit) => char.ToUpperInvariant(unit[0]) + unit[1..];
+
+    /// <summary>"0.0708+j0.8267"; "open" where there is no path (no current flows in that sequence).</summary>
+    private static string Impedance(Complex? z) => z is Complex v
         ? $"{Numbers.Fixed(v.Real, 4)}{(v.Imaginary < 0 ? "-" : "+")}j{Numbers.Fixed(Math.Abs(v.Imaginary), 4)}"
-        : null;
+        : "open";
 }
