@@ -1,6 +1,6 @@
 // Wall-clock time of each stage of one command (--timings): read, validate, build, solve, report.
 using System.Diagnostics;
-using static Study.App.Cli.Format;
+using Study.App.Reports;
 
 namespace Study.App.Cli;
 
@@ -39,11 +39,7 @@ public sealed class StageClock
     public string Render()
     {
         TimingsJson json = ToJson();
-        var table = new TextTable().Left("stage").Column("ms");
-        foreach (StageTimeJson s in json.Stages)
-            table.Row(s.Stage.Contains('.') ? "  " + s.Stage[(s.Stage.IndexOf('.') + 1)..] : s.Stage, F(s.Ms, 1));
-        table.Row("total", F(json.TotalMs, 1));
-        table.Row("since process start", F(json.SinceProcessStartMs, 1));
-        return "\nTimings\n" + table.Render();
+        var rows = json.Stages.Append(new StageTimeJson("total", json.TotalMs)).Append(new StageTimeJson("since process start", json.SinceProcessStartMs));
+        return "\nTimings\n" + PlainTextReport.Table(ReportTable.Of(CommandColumns.Timings, rows));
     }
 }

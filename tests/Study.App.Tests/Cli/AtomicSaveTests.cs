@@ -1,5 +1,5 @@
 // Saving never loses work: a failure between writing the temporary file and the rename leaves the old file whole.
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.App.Cli.Solve;
 using Study.Core.Io;
 using Study.Core.Numerics;
@@ -73,10 +73,8 @@ public sealed class AtomicSaveTests : IDisposable
                 NetworkFile.Write(Demo, path);
                 break;
             case "csv table":
-                var table = new CsvTable("bus", "vPu");
-                table.Row("B1", 1.02);
-                table.Row("B, \"2\"", 0.97);
-                table.Write(path);
+                var spec = new ColumnSpec<(string Bus, double VPu)>().Text("bus", "bus", r => r.Bus).Number("vPu", "V", "pu", r => r.VPu, 4);
+                CsvTable.Of(spec, [("B1", 1.02), ("B, \"2\"", 0.97)]).Write(path);
                 break;
             default:
                 var matrix = new CscMatrix<double>(2, 2, [0, 1, 3], [0, 0, 1], [4.0, 1.0, 3.0]);

@@ -1,6 +1,6 @@
 // --markdown and --csv on solve and taps: one report, rendered as plain text on the terminal and as Markdown in a file.
 using Study.App.Cli;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 
 namespace Study.App.Tests.Cli;
 
@@ -43,24 +43,48 @@ public class ReportCommandsTests
     }
 
     [Fact]
-    public void Fault_markdown_states_the_caution_before_any_fault_level()
+    public void Fault_markdown_states_the_caution_before_any_table_and_gives_levels_and_duty_as_pipe_tables()
     {
         using var dir = new TempDirectory();
         CliOutcome run = CliRun.Run("fault", DemoNetworks.Demo, "--markdown", dir.File("fault.md"));
         Assert.Equal(0, run.ExitCode);
+        Assert.StartsWith("CAUTION: ", run.Out);
         string text = File.ReadAllText(dir.File("fault.md"));
         int caution = text.IndexOf("CAUTION: ", StringComparison.Ordinal);
+        Assert.InRange(caution, 0, text.IndexOf("\n|", StringComparison.Ordinal));
         Assert.InRange(caution, 0, text.IndexOf("I''k", StringComparison.Ordinal));
         Assert.Contains("- **method:** IEC 60909", text);
-        Assert.StartsWith("CAUTION: ", run.Out);
+        Assert.DoesNotContain("```", text);
+        // Levels: bus, kV, type, I''k, S''k, 3I0, X/R, kappa, ip, Z1, Z0 for 9 buses × (3ph, slg); then the breaker duty table.
+        var tables = ReportChecks.MarkdownTables(text);
+        Assert.Equal(2, tables.Count);
+        Assert.Equal((11, 18), tables[0]);
+        Assert.Equal(9, tables[1].Columns);
+        Assert.Contains("| bus | kV | type | I''k kA | S''k MVA |", text);
+    }
+
+    [Fact]
+    public void Fault_markdown_for_chosen_buses_adds_phase_voltages_and_contributions_as_tables()
+    {
+        using var dir = new TempDirectory();
+        CliOutcome run = CliRun.Run("fault", DemoNetworks.Demo, "--bus", "CQ11", "--markdown", dir.File("fault.md"));
+        Assert.Equal(0, run.ExitCode);
+        string text = File.ReadAllText(dir.File("fault.md"));
+        var tables = ReportChecks.MarkdownTables(text);
+        // Levels, then per fault type a phase-voltage table (bus, Va, Vb, Vc) and a contribution table, then breakers.
+        Assert.Equal(1 + 2 * 2 + 1, tables.Count);
+        Assert.Equal((11, 2), tables[0]);
+        Assert.Equal(4, tables[1].Columns);
+        Assert.Equal(4, tables[2].Columns);
+        Assert.Contains("## slg at CQ11: phase voltages after the fault (pu)", text);
+        Assert.InRange(text.IndexOf("CAUTION: ", StringComparison.Ordinal), 0, text.IndexOf("\n|", StringComparison.Ordinal));
     }
 
     [Fact]
     public void Markdown_escapes_markup_in_cells_so_columns_stay_aligned()
     {
-        var table = new ReportTable().Left("id").Column("value");
-        table.Row("LD_A|B*", "1.0");
-        var doc = new ReportDocument("ids with markup").Add(table);
+        var spec = new ColumnSpec<(string Id, double Value)>().Text("id", "id", r => r.Id).Number("value", "value", null, r => r.Value, 1);
+        var doc = new ReportDocument("ids with markup").Table(spec, [("LD_A|B*", 1.0)]);
         string md = MarkdownReport.Render(doc);
         Assert.Equal([(2, 1)], ReportChecks.MarkdownTables(md));
         Assert.Contains(@"LD\_A\|B\*", md);

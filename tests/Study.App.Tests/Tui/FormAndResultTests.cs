@@ -1,4 +1,5 @@
 // Edit forms and result formatting, without a screen: what the form accepts and what the tables say.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.App.Tui.LoadFlow;
 using Study.App.Tui.Shell;

@@ -1,4 +1,5 @@
 // The Outages tab: the dialog's question, the ranked table read without colour, the tab at 80×24, the key.
+using Study.App.Reports;
 using Study.App.Tui.Outages;
 using Study.App.Tui.Shell;
 using Study.App.Tui;

@@ -1,4 +1,5 @@
 // The study tabs without a screen: tap-study question and tables, fault tables, one-line rows, scenarios.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.App.Tui.Faults;
 using Study.App.Tui.LoadFlow;
@@ -49,7 +50,7 @@ public sealed class StudyTabTests
         Assert.NotEmpty(r.Recommended);
         TextTableSource table = TapStudyTables.Positions(r);
         Assert.Equal(r.Max - r.Min + 1, table.Rows);
-        string best = TapStudyTables.Pos(r.Recommended[0].Position);
+        string best = Labels.Position(r.Recommended[0].Position);
         Assert.Contains(table.RowCells, row => row[0].TrimEnd('*') == best && row[2] == "best");
         Assert.Contains("recommended", TapStudyTables.Summary(r));
         Assert.Contains("Alt+P sets " + best, TapStudyTables.Summary(r));

@@ -1,6 +1,6 @@
 // `study compare BEFORE AFTER` or `study compare FILE --scenarios A,B`: bus voltages, branch flows and losses side by side.
 using Study.App.Cli.Files;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

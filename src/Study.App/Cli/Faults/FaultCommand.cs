@@ -1,7 +1,7 @@
 // `study fault FILE`: IEC 60909 (or load-flow based) fault levels at every bus, and breaker duty.
 using System.Numerics;
 using Study.App.Cli.Files;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
@@ -85,12 +85,14 @@ public sealed class FaultCommand : Command
         bool json = args.Has("json");
         string? markdown = args.Value("markdown");
         // The readable report is built only when something shows it: --json alone never does.
-        string? text = !json || markdown is not null ? FaultReport.Render(path, network, result, detail: buses.Count > 0) : null;
-        if (markdown is not null)
-            ReportFiles.WriteMarkdown(markdown, FaultMarkdown.Build(path, network, result, request, request.Scenario, text!));
+        ReportDocument? report = !json || markdown is not null
+            ? FaultReport.Build(path, network, result, request, request.Scenario, detail: buses.Count > 0)
+            : null;
+        if (markdown is not null && report is not null)
+            ReportFiles.WriteMarkdown(markdown, report);
         clock?.Lap("report");
         if (json) CliJson.Write(context, FaultJson.From(result) with { Timings = clock?.ToJson() });
-        else context.Out.Write(text + clock?.Render());
+        else if (report is not null) context.Out.Write(PlainTextReport.Render(report) + clock?.Render());
         return ExitCode.Done;
     }
 }

@@ -1,4 +1,5 @@
 // `study check FILE`: the validation report of a network, every problem at once.
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.Model;
 using Study.Core.Model.Validation;
@@ -25,12 +26,13 @@ public sealed class CheckCommand : Command
 
     private static void WriteReport(TextWriter output, string path, Network network, ValidationReport report)
     {
-        output.WriteLine($"{path}: {NetworkSummary.Describe(network)}");
-        foreach (Problem problem in report.Problems) output.WriteLine("  " + problem.Describe());
         int errors = report.Problems.Count(p => p.Severity == Severity.Error);
         int warnings = report.Problems.Count - errors;
-        output.WriteLine(errors == 0 && warnings == 0
-            ? "clean: no errors, no warnings"
-            : $"{errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
+        var doc = new ReportDocument($"{path}: {NetworkSummary.Describe(network)}")
+            .List(report.Problems.Select(p => p.Describe()))
+            .Text(errors == 0 && warnings == 0
+                ? "clean: no errors, no warnings"
+                : $"{errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
+        output.Write(PlainTextReport.Render(doc));
     }
 }

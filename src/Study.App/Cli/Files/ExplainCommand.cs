@@ -1,5 +1,6 @@
 // `study explain FILE ID`: one element traced from its nameplate data to the per-unit values the engine uses.
 using System.Text;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.Model;
 using Study.Core.Units;
@@ -27,16 +28,15 @@ public sealed class ExplainCommand : Command
 
     public static string Render(Network network, ElementExplanation e)
     {
+        var doc = new ReportDocument(e.Title).Text($"system base {Numbers.Fixed(network.BaseMva, 1)} MVA, {Numbers.Fixed(network.FrequencyHz, 0)} Hz");
+        if (e.Inputs.Count > 0) doc.Heading("Data").Table(CommandColumns.ExplainInputs, e.Inputs);
+        return PlainTextReport.Render(doc.Heading("Derivation").Add(new ReportFigure(Steps(e))));
+    }
+
+    /// <summary>The numbered steps, labels padded to one width so the formulas line up; a default or assumption adds a note line.</summary>
+    private static string Steps(ElementExplanation e)
+    {
         var sb = new StringBuilder();
-        sb.Append($"{e.Title}\n");
-        sb.Append($"system base {Format.F(network.BaseMva, 1)} MVA, {Format.F(network.FrequencyHz, 0)} Hz\n\n");
-        if (e.Inputs.Count > 0)
-        {
-            var inputs = new TextTable().Left("input").Column("value").Left("unit");
-            foreach (ExplainedInput i in e.Inputs) inputs.Row(i.Name, i.Value, i.Unit);
-            sb.Append("Data\n").Append(inputs.Render("  ")).Append('\n');
-        }
-        sb.Append("Derivation\n");
         int width = e.Steps.Count == 0 ? 0 : e.Steps.Max(s => s.Label.Length);
         int number = 0;
         foreach (DerivationStep s in e.Steps)

@@ -1,9 +1,9 @@
 // The report of `study outages`: per scenario, the outages ranked by severity with what each one breaks.
-using static Study.App.Cli.Format;
-using Study.App.Cli.Reports;
 using Study.App.Cli.Solve;
+using Study.App.Reports;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
+using static Study.App.Reports.Numbers;
 using Study.Core.Studies;
 
 namespace Study.App.Cli.Outages;
@@ -33,25 +33,12 @@ public static class OutageReport
     {
         string name = s.Scenario ?? "loads as entered";
         doc.Heading(s.IntactConverged
-            ? $"Scenario {name}: intact case {F(s.IntactLoadMw, 2)} MW load, {Count(s.IntactViolations.Count, "violation")}"
+            ? $"Scenario {name}: intact case {Fixed(s.IntactLoadMw, 2)} MW load, {Count(s.IntactViolations.Count, "violation")}"
             : $"Scenario {name}: the intact case does not converge ({s.IntactMessage}); every violation below counts as new");
         if (s.IntactViolations.Count > 0)
             doc.List(s.IntactViolations.Select(v => "intact: " + LoadFlowReport.Describe(v)));
         doc.Text(Finding(s));
-        var table = new ReportTable { SpaceBefore = true }.Column("rank").Column("severity").Left("out").Left("kind").Left("result")
-            .Left("islanded buses").Column("lost MW").Column("worst V pu").Left("at").Column("worst loading %").Left("on")
-            .Left("parallel branch loading").Left("new violations");
-        for (int i = 0; i < s.Outages.Count; i++)
-        {
-            OutageCase o = s.Outages[i];
-            table.Row(I(i + 1), F(o.Severity, 1), o.Element, o.Kind, Verdict(o),
-                o.IslandedBuses.Count == 0 ? "" : string.Join(", ", o.IslandedBuses),
-                o.LostLoadMw > 0 ? F(o.LostLoadMw, 2) : "",
-                F(o.WorstVPu, 4), o.WorstVBus, F(o.WorstLoadingPercent, 1), o.WorstLoadingElement,
-                string.Join(", ", o.ParallelLoadings.Select(p => $"{p.Element} {F(p.LoadingPercent, 1)} %")),
-                string.Join("; ", o.NewViolations.Select(Short)));
-        }
-        doc.Add(table);
+        doc.Table(OutageColumns.Outages, OutageColumns.Ranked(s), spaceBefore: true);
     }
 
     private static string Finding(ScenarioScreening s)
@@ -60,7 +47,7 @@ public static class OutageReport
         var lost = s.Outages.Where(o => o.Converged && o.LostLoadMw > 0).Select(o => o.Element).ToList();
         var stressed = s.Outages.Where(o => o.Converged && o.LostLoadMw == 0 && o.NewViolations.Count > 0).Select(o => o.Element).ToList();
         var islanded = s.Outages.Where(o => o.Converged && o.LostLoadMw == 0 && o.IslandedBuses.Count > 0)
-            .Select(o => o.LostGenerationMw > 0.005 ? $"{o.Element} ({F(o.LostGenerationMw, 2)} MW generation)" : o.Element).ToList();
+            .Select(o => o.LostGenerationMw > 0.005 ? $"{o.Element} ({Fixed(o.LostGenerationMw, 2)} MW generation)" : o.Element).ToList();
         var parts = new List<string>();
         if (failed.Count > 0) parts.Add($"no convergence with {string.Join(", ", failed)} out");
         if (lost.Count > 0) parts.Add($"load lost with {string.Join(", ", lost)} out");
@@ -71,20 +58,5 @@ public static class OutageReport
         return "Finding: " + string.Join("; ", parts);
     }
 
-    private static string Verdict(OutageCase o) =>
-        !o.Converged ? "NO CONVERGENCE"
-        : o.LostLoadMw > 0 ? "load lost"
-        : o.NewViolations.Count > 0 ? "new violations"
-        : o.IslandedBuses.Count > 0 ? "secure, buses islanded" : "secure";
-
-    /// <summary>A new violation in a few characters: "GT2 120.3 %", "QE33 low 0.941 pu", with the intact value when there was one.</summary>
-    private static string Short(OutageViolation v)
-    {
-        string was = v.IntactValue is double x ? $" (intact {(v.Type == ViolationKind.Overload ? F(x, 1) : F(x, 4))})" : "";
-        return v.Type == ViolationKind.Overload
-            ? $"{v.Element} {F(v.Value, 1)} %{was}"
-            : $"{v.Element} {(v.Type == ViolationKind.Low ? "low" : "high")} {F(v.Value, 4)} pu{was}";
-    }
-
-    private static string Count(int n, string noun) => n == 1 ? $"1 {noun}" : $"{I(n)} {noun}s";
+    private static string Count(int n, string noun) => n == 1 ? $"1 {noun}" : $"{Integer(n)} {noun}s";
 }

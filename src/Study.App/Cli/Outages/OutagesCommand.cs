@@ -1,6 +1,6 @@
 // `study outages FILE`: N-1 screening — each line and transformer out in turn, ranked by severity.
 using Study.App.Cli.Files;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

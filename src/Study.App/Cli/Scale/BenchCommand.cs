@@ -4,7 +4,7 @@ using Study.Core.Faults;
 using Study.Core.LoadFlow;
 using Study.Core.Synthetic;
 using Study.Core.Units;
-using static Study.App.Cli.Format;
+using Study.App.Reports;
 
 namespace Study.App.Cli.Scale;
 
@@ -29,9 +29,7 @@ public sealed class BenchCommand : Command
         context.Out.WriteLine($"machine: {Environment.ProcessorCount} cores, {Environment.OSVersion}, .NET {Environment.Version}; best of {repeat} solves, flat start");
         // The engine references no MathNet provider (MathNet is a test-only reference), so there is none to report.
         context.Out.WriteLine("linear algebra: Study.Core.Numerics sparse LU (managed); no MathNet provider in the engine");
-        var table = new TextTable().Column("buses").Column("branches").Column("J size").Column("J nnz").Column("L+U nnz")
-            .Column("iter").Column("generate ms").Column("build ms").Column("Y ms").Column("analyse ms").Column("jacobian ms")
-            .Column("factor ms").Column("solve ms").Column("total ms").Column("max |dV| pu").Column("3ph scan ms");
+        var rows = new List<BenchRow>();
         foreach (int n in sizes)
         {
             long t0 = Stopwatch.GetTimestamp();
@@ -46,9 +44,8 @@ public sealed class BenchCommand : Command
                 LoadFlowResult r = LoadFlowSolver.Solve(model);
                 if (best is null || r.Timings!.TotalMs < best.Timings!.TotalMs) best = r;
             }
-            LoadFlowTimings t = best!.Timings!;
-            double error = best.Converged ? best.Buses.Select((b, i) => Math.Abs(b.VPu - c.VoltagePu[i])).Max() : double.NaN;
-            string scan = "-";
+            double? error = best!.Converged ? best.Buses.Select((b, i) => Math.Abs(b.VPu - c.VoltagePu[i])).Max() : null;
+            double? scan = null;
             if (!args.Has("no-faults"))
             {
                 var request = new FaultRequest { Kinds = [FaultKind.ThreePhase] };
@@ -59,13 +56,11 @@ public sealed class BenchCommand : Command
                     FaultStudy.Run(model, request);
                     bestScan = Math.Min(bestScan, Stopwatch.GetElapsedTime(ts).TotalMilliseconds);
                 }
-                scan = F(bestScan, 1);
+                scan = bestScan;
             }
-            table.Row(I(n), I(model.Branches.Count), I(t.JacobianSize), I(t.JacobianNonZeros), I(t.FactorNonZeros),
-                best.Converged ? I(best.Iterations) : "failed", F(generateMs, 0), F(buildMs, 1), F(t.AdmittanceMs, 1), F(t.AnalyseMs, 1),
-                F(t.JacobianMs, 1), F(t.FactorMs, 1), F(t.SolveMs, 1), F(t.TotalMs, 1), best.Converged ? E(error) : "-", scan);
+            rows.Add(new BenchRow(n, model.Branches.Count, generateMs, buildMs, best, error, scan));
         }
-        context.Out.Write(table.Render());
+        context.Out.Write(PlainTextReport.Table(ReportTable.Of(CommandColumns.Bench, rows)));
         context.Out.WriteLine($"peak working set: {Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024):0} MiB");
         return ExitCode.Done;
     }

@@ -1,6 +1,6 @@
 // `study solve FILE`: Newton-Raphson load flow, as readable tables or the JSON shape in README, "Results as JSON".
 using Study.App.Cli.Files;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

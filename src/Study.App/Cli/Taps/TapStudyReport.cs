@@ -1,11 +1,11 @@
 // The report of `study taps`: the finding, a table per position and scenario, and a text chart.
 using System.Text;
-using static Study.App.Cli.Format;
-using Study.App.Cli.Reports;
 using Study.App.Cli.Solve;
+using Study.App.Reports;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
 using Study.Core.Studies;
+using static Study.App.Reports.Numbers;
 
 namespace Study.App.Cli.Taps;
 
@@ -13,46 +13,20 @@ public static class TapStudyReport
 {
     private const int ChartWidth = 48;
 
-
     public static ReportDocument Build(string path, Network network, TapStudyResult r, LoadFlowOptions? options = null)
     {
         var doc = new ReportDocument($"Tap study: transformer {r.Transformer} in {LoadFlowReport.Title(network, path)}");
-        string band = r.Band is { } b ? $"{F(b.Low, 3)}–{F(b.High, 3)} pu" : "each bus's vMin–vMax";
+        string band = r.Band is { } b ? $"{Fixed(b.Low, 3)}–{Fixed(b.High, 3)} pu" : "each bus's vMin–vMax";
         string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0] is null ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios);
         LoadFlowReport.AddInputs(doc, path, network, scenarios, options ?? LoadFlowOptions.Default);
-        doc.Input("transformer", $"{r.Transformer}, positions {r.Min}..{r.Max} at {F(r.StepPercent, 2)} % a step");
+        doc.Input("transformer", $"{r.Transformer}, positions {r.Min}..{r.Max} at {Fixed(r.StepPercent, 2)} % a step");
         doc.Input("watched buses", string.Join(", ", r.WatchBuses));
         doc.Input("band", band);
-        doc.Text($"positions {r.Min}..{r.Max} at {F(r.StepPercent, 2)} % a step (file position {r.FilePosition}); "
+        doc.Text($"positions {r.Min}..{r.Max} at {Fixed(r.StepPercent, 2)} % a step (file position {r.FilePosition}); "
                + $"watching {string.Join(", ", r.WatchBuses)}; band {band}; {scenarios}");
         doc.SpacedText($"Finding: {r.Finding}");
-        if (r.Recommended.Count > 0)
-        {
-            var rec = new ReportTable { SpaceBefore = true }.Column("rank").Column("position").Column("worst margin pu");
-            for (int i = 0; i < r.Recommended.Count; i++)
-                rec.Row(I(i + 1), I(r.Recommended[i].Position), F(r.Recommended[i].MarginPu, 4));
-            doc.Add(rec);
-        }
-
-        var table = new ReportTable().Column("position").Column("ratio").Left("scenario");
-        foreach (string bus in r.WatchBuses) table.Column($"{bus} pu");
-        table.Column("system min pu").Left("at").Column("system max pu").Left("at").Column("loss MW").Column("violations").Column("margin pu");
-        foreach (TapStudyPoint p in r.Points)
-        {
-            var cells = new List<string?> { I(p.Position), F(p.Ratio, 4), p.Scenario ?? "-" };
-            if (!p.Converged)
-            {
-                cells.AddRange(r.WatchBuses.Select(_ => "-"));
-                cells.AddRange(["no convergence", "", "", "", "", "", ""]);
-            }
-            else
-            {
-                cells.AddRange(p.Watched.Select(w => F(w.VPu, 4) + (w.VPu < w.LowPu ? "▼" : w.VPu > w.HighPu ? "▲" : " ")));
-                cells.AddRange([F(p.VMinPu, 4), p.VMinBus, F(p.VMaxPu, 4), p.VMaxBus, F(p.LossMw, 3), I(p.Violations), F(p.MarginPu, 4)]);
-            }
-            table.Row(cells.ToArray());
-        }
-        doc.Heading("Every position (▼ below the band, ▲ above)").Add(table);
+        if (r.Recommended.Count > 0) doc.Table(TapStudyColumns.Recommended, TapStudyColumns.Ranked(r), spaceBefore: true);
+        doc.Heading("Every position (▼ below the band, ▲ above)").Table(TapStudyColumns.Points(r), r.Points);
         return doc.Add(new ReportFigure(Chart(r)) { SpaceBefore = true });
     }
 
@@ -76,8 +50,8 @@ public static class TapStudyReport
         var sb = new StringBuilder();
         sb.Append("Watched voltage against position (pu); ");
         sb.Append(string.Join(", ", scenarios.Select((s, i) => $"{i + 1} = {s}")));
-        sb.Append($"; | = band {F(low, 3)}–{F(high, 3)}\n");
-        string axis = $"{F(vMin, 3)}".PadRight(ChartWidth / 2) + $"{F(vMax, 3)}".PadLeft(ChartWidth - ChartWidth / 2);
+        sb.Append($"; | = band {Fixed(low, 3)}–{Fixed(high, 3)}\n");
+        string axis = $"{Fixed(vMin, 3)}".PadRight(ChartWidth / 2) + $"{Fixed(vMax, 3)}".PadLeft(ChartWidth - ChartWidth / 2);
         sb.Append("  position  ").Append(axis).Append('\n');
         foreach (int position in r.Points.Select(p => p.Position).Distinct())
         {

@@ -1,6 +1,6 @@
 // `study taps FILE --transformer ID`: every tap position in every scenario, and the positions that hold the band.
 using Study.App.Cli.Files;
-using Study.App.Cli.Reports;
+using Study.App.Reports;
 using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;

@@ -1,4 +1,5 @@
 // Uniform access to the element lists of a Network by kind: read, find, add, replace, remove by id.
+using Study.App.Reports;
 using Study.Core.Model;
 using Study.App.Tui.Shell;
 

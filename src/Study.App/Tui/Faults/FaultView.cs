@@ -1,4 +1,5 @@
 // The Faults tab: the caution fixed at the top, then fault levels and breaker duty in their own tables.
+using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Faults;
 using Terminal.Gui.Drawing;

@@ -1,4 +1,5 @@
 // The text one-line view: sources on top, then each voltage level downward with its buses, lines and banks.
+using Study.App.Reports;
 using System.Globalization;
 using Study.App.Tui.Taps;
 using Study.Core.LoadFlow;
@@ -72,7 +73,7 @@ public static class OneLineLayout
         double loadMw = n.Loads.Where(l => l.Bus == bus.Id && l.InService).Sum(l => l.PMw);
         string load = r is not null && r.PLoadMw != 0 ? $" ↓{F(r.PLoadMw, "0.0")} MW" : loadMw != 0 ? $" ↓{F(loadMw, "0.0")} MW" : "";
         string shunt = n.Shunts.Any(s => s.Bus == bus.Id && s.InService) ? " ‖shunt" : "";
-        string value = r is null ? "" : !r.Energised ? "  dead        " : $"  {V(r.VPu)} pu{ResultTables.Mark(r.Violation)}{F(r.AngleDeg, "0.00"),7}°";
+        string value = r is null ? "" : !r.Energised ? "  dead        " : $"  {V(r.VPu)} pu{Marks.Padded(r.Violation)}{F(r.AngleDeg, "0.00"),7}°";
         return new OneLineRow($"  ■ {bus.Id,-8}{value}{feeds}{load}{shunt}{Out(bus.InService)}", r?.Violation ?? ViolationKind.None);
     }
 
@@ -81,9 +82,9 @@ public static class OneLineLayout
         bool known = taps.TryGetValue(id, out var state);
         string ratio = known ? $"  ratio {F(state.Ratio, "0.0000")}" : "";
         if (tap is null) return ratio;
-        string range = $"[{TapStudyTables.Pos(tap.Min)}…{TapStudyTables.Pos(tap.Max)}]";
+        string range = $"[{Labels.Position(tap.Min)}…{Labels.Position(tap.Max)}]";
         string regulates = tap.Regulate is { } reg ? $"  holds {reg.Bus} at {V(reg.VTarget)} pu" : "";
-        return $"  tap {TapStudyTables.Pos(known ? state.Position : tap.Position)} {range}{ratio}{regulates}";
+        return $"  tap {Labels.Position(known ? state.Position : tap.Position)} {range}{ratio}{regulates}";
     }
 
     /// <summary>Tap position and ratio per transformer: the solved ones, else the compiled model's.</summary>

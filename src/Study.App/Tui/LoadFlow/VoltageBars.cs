@@ -1,4 +1,5 @@
 // The bus-voltage bar chart as text: one bar per bus on a pu scale, with the band limits marked.
+using Study.App.Reports;
 using System.Globalization;
 using System.Text;
 using Study.Core.LoadFlow;
@@ -37,7 +38,7 @@ public static class VoltageBars
             foreach (int mark in new[] { Col(b.VMin), Col(b.VMax) })
                 bar[mark] = mark <= end ? '╋' : '┆';
             string label = Fit(b.Id, LabelWidth - 1).PadRight(LabelWidth);
-            string value = (b.VPu.ToString("0.0000", CultureInfo.InvariantCulture) + ResultTables.Mark(b.Violation)).PadRight(ValueWidth);
+            string value = (b.VPu.ToString("0.0000", CultureInfo.InvariantCulture) + Marks.Padded(b.Violation)).PadRight(ValueWidth);
             lines.Add(new VoltageBarLine(label + value + bar, b.Violation));
         }
         lines.Add(new VoltageBarLine(Axis(lo, hi, barWidth, Col), ViolationKind.None));

@@ -1,4 +1,5 @@
 // The Outages tab: one heading line per scenario, then the ranked outages of every scenario.
+using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Studies;
 using Terminal.Gui.Drawing;
@@ -45,10 +46,10 @@ public sealed class OutageView : View
     private Scheme? RowScheme(int row)
     {
         if (row < 0 || row >= cases.Count) return null;
-        OutageTables.Tier tier = OutageTables.TierOf(cases[row]);
-        if (tier is OutageTables.Tier.Secure) return null;
+        OutageTier tier = OutageTiers.Of(cases[row]);
+        if (tier is OutageTier.Secure) return null;
         Attr normal = GetAttributeForRole(VisualRole.Normal);
-        return new Scheme(tier is OutageTables.Tier.Stressed
+        return new Scheme(tier is OutageTier.Stressed
             ? new Attr(ColorName16.BrightYellow, normal.Background)
             : new Attr(ColorName16.White, ColorName16.Red));
     }

@@ -1,4 +1,5 @@
 // The main screen: menu bar, element list by kind, the kind's table, the detail/result tabs, status line.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.App.Tui.LoadFlow;
 using Study.Core.LoadFlow;

@@ -1,4 +1,5 @@
 // The detail/result area: tabs for the selected element and for each kind of study result.
+using Study.App.Reports;
 using Study.App.Tui.Faults;
 using Study.App.Tui.LoadFlow;
 using Study.App.Tui.Outages;

@@ -1,4 +1,5 @@
 // The study commands of the main screen: fault study, tap study, applying a recommended tap, outage screening.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.App.Tui.Faults;
 using Study.App.Tui.Outages;
@@ -94,7 +95,7 @@ public sealed class StudyCommands(MainWindow main)
         int position = r.Recommended[0].Position;
         if (CurrentPosition(r.Transformer) == position)
         {
-            Prompts.Tell(App, "Apply tap", $"{r.Transformer} is already on position {TapStudyTables.Pos(position)}.");
+            Prompts.Tell(App, "Apply tap", $"{r.Transformer} is already on position {Labels.Position(position)}.");
             return;
         }
         if (!Session.SetTapPosition(r.Transformer, position))
@@ -102,7 +103,7 @@ public sealed class StudyCommands(MainWindow main)
             Prompts.Tell(App, "Apply tap", $"Transformer {r.Transformer} is no longer in the network, or has no tap.");
             return;
         }
-        main.Status.Summary = $"{r.Transformer} tap set to {TapStudyTables.Pos(position)} (Alt+Z undoes) · F5 re-solves";
+        main.Status.Summary = $"{r.Transformer} tap set to {Labels.Position(position)} (Alt+Z undoes) · F5 re-solves";
     }
 
     private int? CurrentPosition(string id) =>

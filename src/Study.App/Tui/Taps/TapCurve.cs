@@ -1,4 +1,5 @@
 // The tap-study curve as plain numbers: per scenario, the lowest and highest watched voltage at each position.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.Core.Io.CommonFormat;
 using Study.Core.Studies;
@@ -37,7 +38,7 @@ public sealed record TapCurve(int MinPosition, int MaxPosition, double BandLowPu
         for (int s = 0; s < r.Scenarios.Count; s++)
         {
             var points = r.Points.Where(p => p.Scenario == r.Scenarios[s] && p.Converged && p.Watched.Count > 0).OrderBy(p => p.Position).ToList();
-            series.Add(new TapCurveSeries(TapStudyTables.ScenarioName(r.Scenarios[s]), Glyphs[s % Glyphs.Length],
+            series.Add(new TapCurveSeries(Labels.Scenario(r.Scenarios[s]), Glyphs[s % Glyphs.Length],
                 points.Select(p => (curve.XOf(p.Position), (float)p.Watched.Min(w => w.VPu))).ToList(),
                 points.Select(p => (curve.XOf(p.Position), (float)p.Watched.Max(w => w.VPu))).ToList()));
         }

@@ -1,4 +1,5 @@
 // Draws the tap-study curve: watched voltage against tap position per scenario, with the band as lines.
+using Study.App.Reports;
 using System.Text;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.ViewBase;
@@ -69,7 +70,7 @@ public sealed class TapCurveView : GraphView
         AxisX.LabelGetter = i =>
         {
             int position = curve.PositionOf(i.Value);
-            return position < curve.MinPosition || position > curve.MaxPosition ? "" : TapStudyTables.Pos(position);
+            return position < curve.MinPosition || position > curve.MaxPosition ? "" : Labels.Position(position);
         };
         AxisX.Text = "tap position";
         AxisY.LabelGetter = i => i.Value.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);

@@ -1,4 +1,5 @@
 // The Tap study tab: the finding and recommendations, positions × scenarios, and the voltage curve.
+using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Studies;
 using Terminal.Gui.Drawing;

@@ -2,7 +2,7 @@
 using System.Text;
 using Study.Core.Io;
 
-namespace Study.App.Cli.Reports;
+namespace Study.App.Reports;
 
 public static class MarkdownReport
 {
@@ -16,6 +16,7 @@ public static class MarkdownReport
                 sb.Append("- **").Append(Escape(input.Name)).Append(":** ").Append(Escape(input.Value)).Append('\n');
             sb.Append('\n');
         }
+        if (doc.Caution is not null) sb.Append("CAUTION: ").Append(Escape(doc.Caution)).Append("\n\n");
         foreach (ReportBlock block in doc.Blocks)
         {
             switch (block)
@@ -24,7 +25,7 @@ public static class MarkdownReport
                     sb.Append("## ").Append(Escape(h.Text)).Append("\n\n");
                     break;
                 case ReportText t:
-                    foreach (string line in t.Lines) sb.Append(Escape(line)).Append("\n\n");
+                    foreach (string line in t.Lines) sb.Append(Escape(line.Trim())).Append("\n\n");
                     break;
                 case ReportList l:
                     foreach (string item in l.Items) sb.Append("- ").Append(Escape(item)).Append('\n');

@@ -1,5 +1,5 @@
 // The parts a report is made of: headings, lines of text, lists, tables and preformatted figures.
-namespace Study.App.Cli.Reports;
+namespace Study.App.Reports;
 
 /// <summary>One block of a <see cref="ReportDocument"/>; renderers read these and nothing else.</summary>
 public abstract class ReportBlock

@@ -1,5 +1,5 @@
-// A report built once by a command and rendered as plain text (the terminal) or Markdown (a study note).
-namespace Study.App.Cli.Reports;
+// A report built once by a study and rendered as plain text (the terminal) or Markdown (a study note).
+namespace Study.App.Reports;
 
 /// <summary>
 /// Title, the inputs that produced the results, and the blocks of results in order. The inputs
@@ -12,6 +12,13 @@ public sealed class ReportDocument(string title)
     private readonly List<ReportBlock> blocks = [];
 
     public string Title { get; } = title;
+
+    /// <summary>
+    /// The caution that must come before any number (fault, duty and protection results):
+    /// plain text puts it above the title, Markdown right after the inputs.
+    /// </summary>
+    public string? Caution { get; init; }
+
     public IReadOnlyList<ReportInput> Inputs => inputs;
     public IReadOnlyList<ReportBlock> Blocks => blocks;
 
@@ -34,6 +41,9 @@ public sealed class ReportDocument(string title)
     public ReportDocument SpacedText(params string[] lines) => Add(new ReportText(lines) { SpaceBefore = true });
 
     public ReportDocument List(IEnumerable<string> items) => Add(new ReportList(items.ToList()));
+
+    public ReportDocument Table<TRow>(ColumnSpec<TRow> spec, IEnumerable<TRow> rows, bool spaceBefore = false) =>
+        Add(ReportTable.Of(spec, rows, spaceBefore));
 }
 
 /// <summary>One input of a study: "file", "scenario", "options" and the like.</summary>
