@@ -29,7 +29,7 @@ internal static class SmallNetworks
         Name = $"one line at {kv} kV",
         Buses = [new Bus { Id = "S", Kv = kv }, new Bus { Id = "R", Kv = kv, VMin = 0.5, VMax = 1.5 }],
         Supplies = [new Supply { Id = "GRID", Bus = "S" }],
-        Lines = [new Line { Id = "F1", From = "S", To = "R", ROhm = rOhm, XOhm = xOhm }],
+        Lines = [new Line { Id = "F1", From = "S", To = "R", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = rOhm, X = xOhm } }],
         Loads = [new Load { Id = "L1", Bus = "R", PMw = loadMw, QMvar = loadMvar }],
     };
 }

@@ -37,7 +37,7 @@ internal sealed class SequenceBranches
         {
             PuBranch b = model.Branches[k];
             // IEC 60909 takes transformers at their rated ratio, i.e. the tap at its neutral position (from memory).
-            double ratio = iec && b.Tap is int tap ? model.Taps[tap].RatioAt(model.Taps[tap].Neutral) : b.Ratio;
+            double ratio = iec && b.Tap is int tap ? model.Taps[tap].RatioAt(0) : b.Ratio;
             double kT = 1.0;
             VectorGroup? group = null;
             if (b.Kind == BranchKind.Transformer)
@@ -104,7 +104,7 @@ internal sealed class SequenceBranches
             case BranchKind.Line:
                 if (b.Z0 is Complex z0Line) return ZeroSequencePath.Line(corrected, z0Line);
                 problem = new InputException(
-                    $"line {b.Id} has no zero-sequence data (r0OhmPerKm/x0OhmPerKm or r0Ohm/x0Ohm or r0Pu/x0Pu)", elementId: b.Id);
+                    $"line {b.Id} has no zero-sequence data (z0): an earth-fault study needs it; give z0 with per, r and x", elementId: b.Id);
                 return ZeroSequencePath.Open;
             case BranchKind.Transformer when group is not null:
             {

@@ -150,9 +150,7 @@ public static class CommonFormatReader
         Id = id,
         From = Id(card.TapBus),
         To = Id(card.ZBus),
-        RPu = card.RPu,
-        XPu = card.XPu,
-        BPu = card.BPu,
+        Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = card.RPu, X = card.XPu, B = card.BPu },
         RatingMva = card.Rating1Mva != 0 ? card.Rating1Mva : null,
     };
 

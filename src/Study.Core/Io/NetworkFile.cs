@@ -18,7 +18,19 @@ public static partial class NetworkFile
         TypeInfoResolver = NetworkJsonContext.Default.WithAddedModifier(OmitInServiceWhenTrue),
     };
 
+    /// <summary>Version 1 files name a line's impedance and a tap changer by other keys (<see cref="LineVersion1Converter"/>).</summary>
+    private static readonly JsonSerializerOptions Version1Options = new(Options)
+    {
+        Converters = { new LineVersion1Converter(), new TapChangerVersion1Converter() },
+    };
+
     private static JsonTypeInfo<Network> NetworkInfo => (JsonTypeInfo<Network>)Options.GetTypeInfo(typeof(Network));
+
+    private static JsonTypeInfo<Network> Version1Info => (JsonTypeInfo<Network>)Version1Options.GetTypeInfo(typeof(Network));
+
+    /// <summary>The one-line note a version 1 file carries (in <see cref="SourceMap.Notes"/>).</summary>
+    public static string Version1Note(string? file) =>
+        $"{file ?? "the file"} is a version 1 network file; 'study convert {file ?? "IN"} OUT' writes it as version {Network.CurrentVersion}";
 
     /// <summary>Reads a network file or an IEEE Common Format case from disk.</summary>
     public static Network Read(string path)
@@ -57,17 +69,20 @@ public static partial class NetworkFile
             fileName, 1, 1);
     }
 
-    public static string ToJson(Network network) => JsonSerializer.Serialize(network, NetworkInfo) + "\n";
+    /// <summary>The network file text: always the current version, keys in a stable order, two-space indentation.</summary>
+    public static string ToJson(Network network) =>
+        JsonSerializer.Serialize(network with { Format = Network.FormatName, Version = Network.CurrentVersion }, NetworkInfo) + "\n";
 
     /// <summary>Writes the network file atomically (temporary file, flush, rename).</summary>
     public static void Write(Network network, string path) => AtomicFile.WriteAllText(path, ToJson(network));
 
     private static Network ParseJson(byte[] utf8, string? fileName)
     {
+        int version = DeclaredVersion(utf8, fileName);
         Network? network;
         try
         {
-            network = JsonSerializer.Deserialize(utf8, NetworkInfo);
+            network = JsonSerializer.Deserialize(utf8, version == 1 ? Version1Info : NetworkInfo);
         }
         catch (JsonException e)
         {
@@ -79,14 +94,42 @@ public static partial class NetworkFile
             (int line, int column) = TopLevelValue(utf8, "format");
             throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName, line, column);
         }
-        if (network.Version > Network.CurrentVersion)
-        {
-            (int line, int column) = TopLevelValue(utf8, "version");
-            throw new InputException(
-                $"file version {network.Version} is newer than this program reads ({Network.CurrentVersion})", fileName, line, column);
-        }
+        IReadOnlyList<string> notes = version == 1 ? [Version1Note(fileName)] : [];
         // The lines are only needed for messages: found on the first look-up, so a clean file skips the scan.
-        return network with { Source = new SourceMap(fileName, () => ElementLines(utf8)) };
+        return network with { Version = Network.CurrentVersion, Source = new SourceMap(fileName, () => ElementLines(utf8)) { Notes = notes } };
+    }
+
+    /// <summary>
+    /// The top-level "version" (the current one when absent), read before the rest because the keys of
+    /// the file depend on it. Only versions this program knows are read.
+    /// </summary>
+    private static int DeclaredVersion(byte[] utf8, string? fileName)
+    {
+        var reader = new Utf8JsonReader(utf8, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip });
+        int? version = null;
+        try
+        {
+            while (reader.Read())
+            {
+                if (reader.CurrentDepth != 1 || reader.TokenType != JsonTokenType.PropertyName || !reader.ValueTextEquals("version")) continue;
+                reader.Read();
+                version = reader.TokenType == JsonTokenType.Number && reader.TryGetInt32(out int v) ? v : int.MinValue;
+            }
+        }
+        catch (JsonException)
+        {
+            // A syntax error: the deserializer reports it with its line and column.
+            return Network.CurrentVersion;
+        }
+        if (version is null) return Network.CurrentVersion;
+        if (version is 1 or Network.CurrentVersion) return version.Value;
+        (int line, int column) = TopLevelValue(utf8, "version");
+        string shown = version == int.MinValue ? "not a whole number" : version.Value.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        throw new InputException(
+            version > Network.CurrentVersion
+                ? $"file version {shown} is newer than this program reads (1 and {Network.CurrentVersion})"
+                : $"file version {shown} is not a version of the network file (this program reads 1 and {Network.CurrentVersion})",
+            fileName, line, column);
     }
 
     /// <summary>Rewrites a serializer message into one that names the key, the line and the column.</summary>

@@ -12,13 +12,14 @@ namespace Study.Core.Io;
     WriteIndented = true,
     IndentSize = 2,
     AllowTrailingCommas = false,
+    AllowDuplicateProperties = false,
     ReadCommentHandling = System.Text.Json.JsonCommentHandling.Skip,
-    Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapSide>)])]
+    Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapWinding>), typeof(NamedEnumConverter<ImpedanceBasis>)])]
 [JsonSerializable(typeof(Network))]
 internal sealed partial class NetworkJsonContext : JsonSerializerContext;
 
 /// <summary>
-/// The file's enum keys ("mode", "side") by name, as the model's names are spelled; a number is a
+/// The file's enum keys ("mode", "winding", "per") by name, as the model's names are spelled; a number is a
 /// wrong type of value, not an index into the enum (which would also admit values with no meaning).
 /// </summary>
 internal sealed class NamedEnumConverter<TEnum>() : JsonStringEnumConverter<TEnum>(namingPolicy: null, allowIntegerValues: false)

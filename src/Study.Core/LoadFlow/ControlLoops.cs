@@ -107,7 +107,7 @@ internal sealed class ControlLoops
             double low = lead.VTarget - lead.BandPu / 2, high = lead.VTarget + lead.BandPu / 2;
             foreach (int k in group) AtLimit[k] = null;
             if (v >= low && v <= high) continue;
-            double stepPu = Math.Abs(lead.StepPercent) / 100.0;
+            double stepPu = Math.Abs(lead.PercentPerStep) / 100.0;
             int wantedSteps = (int)Math.Round((lead.VTarget - v) / Math.Max(stepPu * v, 1e-9), MidpointRounding.AwayFromZero);
             if (wantedSteps == 0) wantedSteps = v < low ? 1 : -1;
             foreach (int k in group)

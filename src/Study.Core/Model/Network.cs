@@ -51,7 +51,7 @@ public sealed record Network
     }
 
     public const string FormatName = "study-network";
-    public const int CurrentVersion = 1;
+    public const int CurrentVersion = 2;
 
     public string Format { get; init; } = FormatName;
     public int Version { get; init; } = CurrentVersion;

@@ -28,6 +28,9 @@ public sealed class SourceMap
 
     public string? File { get; }
 
+    /// <summary>What the reader noticed about the file as a whole (a version 1 file, say): one line each.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     public static string Key(ElementFamily family, string id) => $"{family}/{id}";
 
     /// <summary>The 1-based line where the element starts, when known.</summary>

@@ -1,19 +1,30 @@
 // Tap changer of a transformer: which winding it is on, its range, and optional on-load regulation.
 using System.Diagnostics.CodeAnalysis;
+using System.Text.Json;
 using System.Text.Json.Serialization;
 
 namespace Study.Core.Model;
 
-/// <summary>Winding that carries the taps.</summary>
-[System.Text.Json.Serialization.JsonConverter(typeof(System.Text.Json.Serialization.JsonStringEnumConverter<TapSide>))]
-public enum TapSide
+/// <summary>The winding that carries the taps.</summary>
+[JsonConverter(typeof(JsonStringEnumConverter<TapWinding>))]
+public enum TapWinding
 {
-    [System.Text.Json.Serialization.JsonStringEnumMemberName("hv")]
+    [JsonStringEnumMemberName("hv")]
     Hv,
-    [System.Text.Json.Serialization.JsonStringEnumMemberName("lv")]
+    [JsonStringEnumMemberName("lv")]
     Lv,
-    [System.Text.Json.Serialization.JsonStringEnumMemberName("mv")]
+    [JsonStringEnumMemberName("mv")]
     Mv,
+}
+
+/// <summary>The positions a tap changer can take, <see cref="Lowest"/> to <see cref="Highest"/>; written as [lowest, highest].</summary>
+[JsonConverter(typeof(TapRangeConverter))]
+public readonly record struct TapRange(int Lowest, int Highest)
+{
+    /// <summary>Number of positions (0 when the range is reversed).</summary>
+    public int Count => Math.Max(0, Highest - Lowest + 1);
+
+    public bool Contains(int position) => position >= Lowest && position <= Highest;
 }
 
 /// <summary>On-load regulation: hold the voltage of a (local or remote) bus inside a dead band around VTarget.</summary>
@@ -38,16 +49,48 @@ public sealed record TapRegulation
 }
 
 /// <summary>
-/// A tap changer. Position p gives the tapped winding's voltage factor 1 + (p − Neutral)·StepPercent/100.
-/// Without <see cref="Regulate"/> it is a fixed (off-circuit) tap.
+/// A tap changer. At position p the tapped winding's voltage is multiplied by 1 + p·PercentPerStep/100,
+/// so position 0 is the rated ratio. Without <see cref="Regulate"/> it is a fixed (off-circuit) tap.
 /// </summary>
 public sealed record TapChanger
 {
-    public TapSide Side { get; init; } = TapSide.Hv;
-    public double StepPercent { get; init; }
-    public int Min { get; init; }
-    public int Max { get; init; }
-    public int Neutral { get; init; }
+    public TapWinding Winding { get; init; } = TapWinding.Hv;
+
+    /// <summary>Voltage change of one step, percent of the winding's rated voltage.</summary>
+    public double PercentPerStep { get; init; }
+
+    public TapRange Range { get; init; }
+
+    /// <summary>The position now (for an on-load changer, where the load flow starts).</summary>
     public int Position { get; init; }
+
     public TapRegulation? Regulate { get; init; }
+
+    /// <summary>The tapped winding's voltage factor at a position: 1 + position·PercentPerStep/100.</summary>
+    public double FactorAt(int position) => 1.0 + position * PercentPerStep / 100.0;
+}
+
+/// <summary>Reads and writes a <see cref="TapRange"/> as a JSON array of two whole numbers, [lowest, highest].</summary>
+internal sealed class TapRangeConverter : JsonConverter<TapRange>
+{
+    public override TapRange Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options)
+    {
+        if (reader.TokenType != JsonTokenType.StartArray)
+            throw new JsonException("range must be an array of two whole numbers, [lowest, highest]");
+        var values = new List<int>(2);
+        while (reader.Read() && reader.TokenType != JsonTokenType.EndArray)
+        {
+            if (reader.TokenType != JsonTokenType.Number || !reader.TryGetInt32(out int v) || values.Count == 2)
+                throw new JsonException("range must be an array of two whole numbers, [lowest, highest]");
+            values.Add(v);
+        }
+        if (values.Count != 2) throw new JsonException("range must be an array of two whole numbers, [lowest, highest]");
+        return new TapRange(values[0], values[1]);
+    }
+
+    public override void Write(Utf8JsonWriter writer, TapRange value, JsonSerializerOptions options)
+    {
+        // One line, as a person writes it: "range": [-8, 8].
+        writer.WriteRawValue($"[{value.Lowest}, {value.Highest}]");
+    }
 }

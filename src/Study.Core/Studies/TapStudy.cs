@@ -102,7 +102,7 @@ public static class TapStudy
                   + "(look at the upstream voltage, the bank's impedance or a narrower load spread)";
         return new TapStudyResult
         {
-            Transformer = request.TransformerId, Min = tap.Min, Max = tap.Max, StepPercent = tap.StepPercent,
+            Transformer = request.TransformerId, Min = tap.Min, Max = tap.Max, StepPercent = tap.PercentPerStep,
             FilePosition = tap.Position, WatchBuses = watch, Band = request.Band,
             Scenarios = scenarios.Select(s => s?.Name).ToList(), Points = points,
             Recommended = recommended, Closest = closest, Finding = finding,

@@ -229,7 +229,7 @@ public static class SyntheticGrid
             if (b.IsTransformer)
                 transformers.Add(new Transformer { Id = id, Hv = Id(b.From), Lv = Id(b.To), RPu = b.R, XPu = b.X, Ratio = b.Ratio, VectorGroup = "YNyn0" });
             else
-                lines.Add(new Line { Id = id, From = Id(b.From), To = Id(b.To), RPu = b.R, XPu = b.X, BPu = b.B });
+                lines.Add(new Line { Id = id, From = Id(b.From), To = Id(b.To), Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = b.R, X = b.X, B = b.B } });
         }
         return new Network
         {

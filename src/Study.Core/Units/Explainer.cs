@@ -36,13 +36,10 @@ public static class Explainer
 
     private static ElementExplanation Line(Network n, Line l, double s)
     {
-        var inputs = new Inputs().Text("from", l.From).Text("to", l.To).Num("lengthKm", l.LengthKm, "km")
-            .Num("rOhmPerKm", l.ROhmPerKm, "ohm/km").Num("xOhmPerKm", l.XOhmPerKm, "ohm/km").Num("bUsPerKm", l.BUsPerKm, "µS/km")
-            .Num("r0OhmPerKm", l.R0OhmPerKm, "ohm/km").Num("x0OhmPerKm", l.X0OhmPerKm, "ohm/km").Num("b0UsPerKm", l.B0UsPerKm, "µS/km")
-            .Num("rOhm", l.ROhm, "ohm").Num("xOhm", l.XOhm, "ohm").Num("bUs", l.BUs, "µS")
-            .Num("r0Ohm", l.R0Ohm, "ohm").Num("x0Ohm", l.X0Ohm, "ohm").Num("b0Us", l.B0Us, "µS")
-            .Num("rPu", l.RPu, "pu").Num("xPu", l.XPu, "pu").Num("bPu", l.BPu, "pu")
-            .Num("r0Pu", l.R0Pu, "pu").Num("x0Pu", l.X0Pu, "pu").Num("b0Pu", l.B0Pu, "pu").Num("ratingMva", l.RatingMva, "MVA");
+        var inputs = new Inputs().Text("from", l.From).Text("to", l.To).Num("km", l.Km, "km");
+        AddSequence(inputs, "z1", l.Z1);
+        AddSequence(inputs, "z0", l.Z0);
+        inputs.Num("ratingMva", l.RatingMva, "MVA");
         var c = LineImpedance.Convert(l, BusOf(n, l.From, l.Id), s);
         return new(l.Id, ElementKind.Line, $"Line {l.Id}, {l.From} – {l.To}", inputs.List, c.Steps);
     }
@@ -127,11 +124,23 @@ public static class Explainer
         return new(b.Id, ElementKind.Breaker, $"Breaker {b.Id} at {b.Bus}", inputs.List, BaseQuantities.ForBus(BusOf(n, b.Bus, b.Id), s).Steps);
     }
 
+    private static void AddSequence(Inputs inputs, string key, SequenceImpedance? z)
+    {
+        if (z is null) return;
+        (string ohm, string siemens, string per) = z.Per switch
+        {
+            ImpedanceBasis.PerKm => ("ohm/km", "µS/km", "km"),
+            ImpedanceBasis.WholeLine => ("ohm", "µS", "line"),
+            _ => ("pu", "pu", "pu"),
+        };
+        inputs.Text($"{key}.per", per).Num($"{key}.r", z.R, ohm).Num($"{key}.x", z.X, ohm).Num($"{key}.b", z.B, siemens);
+    }
+
     private static void AddTap(Inputs inputs, TapChanger? tap)
     {
         if (tap is null) return;
-        inputs.Text("tap.side", tap.Side.ToString().ToLowerInvariant()).Num("tap.stepPercent", tap.StepPercent, "%")
-            .Num("tap.min", tap.Min, "").Num("tap.max", tap.Max, "").Num("tap.neutral", tap.Neutral, "").Num("tap.position", tap.Position, "");
+        inputs.Text("tap.winding", tap.Winding.ToString().ToLowerInvariant()).Num("tap.percentPerStep", tap.PercentPerStep, "%")
+            .Text("tap.range", $"[{tap.Range.Lowest}, {tap.Range.Highest}]").Num("tap.position", tap.Position, "");
         if (tap.Regulate is { } r)
             inputs.Text("tap.regulate.bus", r.Bus).Num("tap.regulate.vTarget", r.VTarget, "pu").Num("tap.regulate.bandPu", r.BandPu, "pu");
     }

@@ -108,18 +108,17 @@ public sealed record PuShunt
 
 /// <summary>
 /// A tap changer in the compiled model: enough to recompute the branch ratio at any position.
-/// Ratio(p) = (HvFactor · TapFactor_hv(p)) / (LvFactor · TapFactor_lv(p)).
+/// Ratio(p) = (HvFactor · TapFactor_hv(p)) / (LvFactor · TapFactor_lv(p)), TapFactor(p) = 1 + p·PercentPerStep/100.
 /// </summary>
 public sealed record PuTap
 {
     /// <summary>Id of the transformer.</summary>
     public required string Id { get; init; }
     public int Branch { get; init; }
-    public TapSide Side { get; init; }
-    public double StepPercent { get; init; }
+    public TapWinding Winding { get; init; }
+    public double PercentPerStep { get; init; }
     public int Min { get; init; }
     public int Max { get; init; }
-    public int Neutral { get; init; }
     public int Position { get; init; }
     /// <summary>Rated winding kV over the bus base kV on the hv side (1 when per-unit only).</summary>
     public double HvFactor { get; init; } = 1.0;
@@ -129,14 +128,14 @@ public sealed record PuTap
     public double VTarget { get; init; } = 1.0;
     public double BandPu { get; init; }
     /// <summary>
-    /// True when the tap factor multiplies the From end whatever <see cref="Side"/> says: the windings of
+    /// True when the tap factor multiplies the From end whatever <see cref="Winding"/> says: the windings of
     /// a three-winding transformer, each a branch from its own terminal to the star.
     /// </summary>
     public bool FactorAtFrom { get; init; }
 
-    public double TapFactor(int position) => 1.0 + (position - Neutral) * StepPercent / 100.0;
+    public double TapFactor(int position) => 1.0 + position * PercentPerStep / 100.0;
 
-    public double RatioAt(int position) => Side == TapSide.Lv && !FactorAtFrom
+    public double RatioAt(int position) => Winding == TapWinding.Lv && !FactorAtFrom
         ? HvFactor / (LvFactor * TapFactor(position))
         : HvFactor * TapFactor(position) / LvFactor;
 }

@@ -97,7 +97,7 @@ public sealed partial record PerUnitModel
             foreach (var (w, terminal) in new[] { (c.Hv, t.Hv), (c.Mv, t.Mv), (c.Lv, t.Lv) })
             {
                 int? tapIndex = null;
-                if (t.Tap is { } tap && SideName(tap.Side) == w.Winding)
+                if (t.Tap is { } tap && WindingName(tap.Winding) == w.Winding)
                 {
                     tapIndex = taps.Count;
                     taps.Add(NewTap(t.Id, branches.Count, tap, w.WindingFactor, 1.0, factorAtFrom: true));
@@ -233,15 +233,15 @@ public sealed partial record PerUnitModel
 
     private static PuTap NewTap(string id, int branch, TapChanger tap, double hvFactor, double lvFactor, bool factorAtFrom) => new()
     {
-        Id = id, Branch = branch, Side = tap.Side, StepPercent = tap.StepPercent,
-        Min = tap.Min, Max = tap.Max, Neutral = tap.Neutral, Position = tap.Position,
+        Id = id, Branch = branch, Winding = tap.Winding, PercentPerStep = tap.PercentPerStep,
+        Min = tap.Range.Lowest, Max = tap.Range.Highest, Position = tap.Position,
         HvFactor = hvFactor, LvFactor = lvFactor, FactorAtFrom = factorAtFrom,
     };
 
-    private static string SideName(TapSide side) => side switch
+    private static string WindingName(TapWinding winding) => winding switch
     {
-        TapSide.Hv => "hv",
-        TapSide.Mv => "mv",
+        TapWinding.Hv => "hv",
+        TapWinding.Mv => "mv",
         _ => "lv",
     };
 }

@@ -58,9 +58,9 @@ public static class ThreeWindingStar
         double zL = d.Step("z_L", $"(z_HL + z_ML − z_HM) / 2 = ({N(zHl)} + {N(zMl)} − {N(zHm)}) / 2", (zHl + zMl - zHm) / 2, "pu");
         double k = d.Step("base change", $"S_base / zBaseMva = {N(baseMva)} / {N(zBaseMva)}", baseMva / zBaseMva, "");
 
-        var hv = Winding(d, "hv", zH, k, t.Xr, hvKv, hvBusKv, t.MvaHv, TapOn(t, TapSide.Hv));
-        var mv = Winding(d, "mv", zM, k, t.Xr, mvKv, mvBusKv, t.MvaMv, TapOn(t, TapSide.Mv));
-        var lv = Winding(d, "lv", zL, k, t.Xr, lvKv, lvBusKv, t.MvaLv, TapOn(t, TapSide.Lv));
+        var hv = Winding(d, "hv", zH, k, t.Xr, hvKv, hvBusKv, t.MvaHv, TapOn(t, TapWinding.Hv));
+        var mv = Winding(d, "mv", zM, k, t.Xr, mvKv, mvBusKv, t.MvaMv, TapOn(t, TapWinding.Mv));
+        var lv = Winding(d, "lv", zL, k, t.Xr, lvKv, lvBusKv, t.MvaLv, TapOn(t, TapWinding.Lv));
         if (hv.ZPu == Complex.Zero || mv.ZPu == Complex.Zero || lv.ZPu == Complex.Zero)
             throw new InputException("a star winding has zero impedance: check zHmPercent, zHlPercent, zMlPercent", elementId: t.Id);
 
@@ -72,7 +72,7 @@ public static class ThreeWindingStar
         return new ThreeWindingStarResult(hv, mv, lv, ym, hvKv, d.ToList());
     }
 
-    private static TapChanger? TapOn(ThreeWindingTransformer t, TapSide side) => t.Tap is { } tap && tap.Side == side ? tap : null;
+    private static TapChanger? TapOn(ThreeWindingTransformer t, TapWinding winding) => t.Tap is { } tap && tap.Winding == winding ? tap : null;
 
     private static StarWinding Winding(Derivation d, string name, double zOwn, double k, double xr, double windingKv, double busKv,
         double ratingMva, TapChanger? tap)
@@ -83,8 +83,8 @@ public static class ThreeWindingStar
         double ratio = w;
         if (tap is not null)
         {
-            double f = d.Step($"tap factor ({name})", $"1 + (position − neutral) · step / 100 = 1 + ({tap.Position} − {tap.Neutral}) · {N(tap.StepPercent)} / 100",
-                TapRatio.Factor(tap.Position, tap.Neutral, tap.StepPercent), "pu");
+            double f = d.Step($"tap factor ({name})", $"1 + position · percentPerStep / 100 = 1 + {tap.Position} · {N(tap.PercentPerStep)} / 100",
+                TapRatio.Factor(tap.Position, tap.PercentPerStep), "pu");
             ratio = d.Step($"t_{name}", $"{name}Kv · f / kV_{name} bus = {N(w)} · {N(f)}", w * f, "pu");
         }
         else

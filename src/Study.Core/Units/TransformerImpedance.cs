@@ -49,8 +49,8 @@ public static class TransformerImpedance
     {
         if (t.Units < 1)
             throw new InputException($"units must be at least 1 (got {t.Units})", elementId: t.Id);
-        if (t.Tap is { Side: TapSide.Mv })
-            throw new InputException("tap side mv on a two-winding transformer: use hv or lv", elementId: t.Id);
+        if (t.Tap is { Winding: TapWinding.Mv })
+            throw new InputException("tap winding mv on a two-winding transformer: use hv or lv", elementId: t.Id);
         return FormOf(t) == TransformerDataForm.Nameplate ? Nameplate(t, hvBus, lvBus, baseMva, recordSteps) : PerUnit(t, baseMva, recordSteps);
     }
 
@@ -146,9 +146,9 @@ public static class TransformerImpedance
         if (t.Tap is { } tap)
         {
             // The given ratio is the ratio at the tap's present position; factor it so RatioAt(p) reproduces it.
-            double f = d.Step("tap factor", $"1 + ({tap.Position} − {tap.Neutral}) · {N(tap.StepPercent)} / 100",
-                TapRatio.Factor(tap.Position, tap.Neutral, tap.StepPercent), "pu");
-            hvFactor = tap.Side == TapSide.Lv ? ratio * f : ratio / f;
+            double f = d.Step("tap factor", $"1 + {tap.Position} · {N(tap.PercentPerStep)} / 100",
+                TapRatio.Factor(tap.Position, tap.PercentPerStep), "pu");
+            hvFactor = tap.Winding == TapWinding.Lv ? ratio * f : ratio / f;
         }
         return new TransformerImpedanceResult
         {

@@ -19,7 +19,7 @@ public sealed class FormAndResultTests
         form.Texts[length] = "3.5";
         FormState state = form.Evaluate();
         Assert.True(state.CanAccept);
-        Assert.Equal(3.5, ((Line)state.Element!).LengthKm);
+        Assert.Equal(3.5, ((Line)state.Element!).Km);
         Assert.NotEmpty(state.Preview);
     }
 

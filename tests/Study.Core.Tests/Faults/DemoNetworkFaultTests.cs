@@ -86,12 +86,12 @@ public class DemoNetworkFaultTests
         var demo = TestNetworks.Demo;
         var network = demo with
         {
-            Lines = demo.Lines.Select(l => l.Id == "RING-2" ? l with { R0OhmPerKm = null, X0OhmPerKm = null, B0UsPerKm = null } : l).ToList(),
+            Lines = demo.Lines.Select(l => l.Id == "RING-2" ? l with { Z0 = null } : l).ToList(),
         };
         var model = PerUnitModel.Build(network);
         var e = Assert.Throws<InputException>(() => FaultStudy.Run(model));
         Assert.Equal("RING-2", e.ElementId);
-        Assert.Contains("line RING-2 has no zero-sequence data (r0OhmPerKm/x0OhmPerKm or r0Ohm/x0Ohm or r0Pu/x0Pu)", e.Message);
+        Assert.Contains("line RING-2 has no zero-sequence data (z0)", e.Message);
         // A three-phase study does not need the zero sequence.
         var three = FaultStudy.Run(model, new FaultRequest { Kinds = [FaultKind.ThreePhase] });
         Assert.All(three.Faults, f => Assert.Null(f.Z0Pu));

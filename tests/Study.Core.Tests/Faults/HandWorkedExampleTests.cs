@@ -44,8 +44,9 @@ public class HandWorkedExampleTests
         [
             new Line
             {
-                Id = "C1", From = "B33", To = "END", LengthKm = 5, ROhmPerKm = 0.1, XOhmPerKm = 0.12, BUsPerKm = 60,
-                R0OhmPerKm = 0.4, X0OhmPerKm = 0.3, B0UsPerKm = 60,
+                Id = "C1", From = "B33", To = "END", Km = 5,
+                Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.1, X = 0.12, B = 60 },
+                Z0 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.4, X = 0.3, B = 60 },
             },
         ],
     };

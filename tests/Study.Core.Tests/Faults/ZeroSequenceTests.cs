@@ -34,8 +34,9 @@ public class ZeroSequenceTests
             [
                 new Line
                 {
-                    Id = "C1", From = "LV", To = "FAR", LengthKm = 10, ROhmPerKm = 0.1, XOhmPerKm = 0.12, BUsPerKm = 60,
-                    R0OhmPerKm = 0.4, X0OhmPerKm = 0.3, B0UsPerKm = 60,
+                    Id = "C1", From = "LV", To = "FAR", Km = 10,
+                    Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.1, X = 0.12, B = 60 },
+                    Z0 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.4, X = 0.3, B = 60 },
                 },
             ],
         };

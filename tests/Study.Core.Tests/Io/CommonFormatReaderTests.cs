@@ -36,11 +36,12 @@ public class CommonFormatReaderTests
     {
         Line l12 = Ieee14().Lines.Single(l => l.Id == "1-2");
         Assert.Equal(("1", "2"), (l12.From, l12.To));
-        Assert.Equal(0.01938, l12.RPu);
-        Assert.Equal(0.05917, l12.XPu);
-        Assert.Equal(0.0528, l12.BPu);
+        Assert.Equal(ImpedanceBasis.PerUnit, l12.Z1!.Per);
+        Assert.Equal(0.01938, l12.Z1.R);
+        Assert.Equal(0.05917, l12.Z1.X);
+        Assert.Equal(0.0528, l12.Z1.B);
         Assert.Null(l12.RatingMva);
-        Assert.Null(l12.ROhm);
+        Assert.Null(l12.Z0);
     }
 
     [Fact]
@@ -194,7 +195,7 @@ public class CommonFormatReaderTests
         Network n = CommonFormatReader.Parse(string.Join("\n", lines), "short.txt");
         Assert.Equal(14.9, n.Loads.Single(l => l.Bus == "14").PMw);
         Assert.Equal(0, n.PublishedSolution!.Buses[13].QGenMvar);
-        Assert.Equal(0.0528, n.Lines.Single(l => l.Id == "1-2").BPu);
+        Assert.Equal(0.0528, n.Lines.Single(l => l.Id == "1-2").Z1!.B);
     }
 
     [Fact]

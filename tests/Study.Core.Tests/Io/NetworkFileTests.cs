@@ -36,7 +36,7 @@ public class NetworkFileTests
         Assert.Equal(1, n.Transformers[0].Units);
         Assert.False(n.Transformers[0].InService);
         Assert.True(n.Loads[0].InService);
-        Assert.Equal(TapSide.Hv, n.Transformers[0].Tap!.Side);
+        Assert.Equal(TapWinding.Hv, n.Transformers[0].Tap!.Winding);
         Assert.Equal(2, n.Transformers[0].Tap!.Position);
         Assert.Equal(GeneratorMode.Pq, n.Generators[0].Mode);
         Assert.Equal(50, n.FrequencyHz);

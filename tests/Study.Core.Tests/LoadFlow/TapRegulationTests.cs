@@ -49,7 +49,7 @@ public class TapRegulationTests
         // Ask for 1.10 pu on the 33 kV bus with only ±2 steps of 1.25 %: the tap runs to its end.
         var tap = new TapChanger
         {
-            Side = TapSide.Hv, StepPercent = 1.25, Min = -2, Max = 2, Position = 0,
+            Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-2, 2), Position = 0,
             Regulate = new TapRegulation { Bus = "LV", VTarget = 1.10, BandPu = 0.015 },
         };
         LoadFlowResult r = LoadFlowSolver.Solve(PerUnitModel.Build(SmallNetworks.Transformer132To33(20, 5, tap: tap)));

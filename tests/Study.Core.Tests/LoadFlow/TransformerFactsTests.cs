@@ -50,7 +50,7 @@ public class TransformerFactsTests
     {
         // Common practice: one step of s % on the hv side raises the turns ratio by s % and lowers the
         // lv voltage by about s % at light load.
-        TapChanger Tap(int position) => new() { Side = TapSide.Hv, StepPercent = 1.25, Min = -8, Max = 8, Position = position };
+        TapChanger Tap(int position) => new() { Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-8, 8), Position = position };
         double V(int position) => Solve(SmallNetworks.Transformer132To33(loadMw: 1, loadMvar: 0.3, tap: Tap(position)))
             .Buses.Single(b => b.Id == "LV").VPu;
         double v0 = V(0), v1 = V(1);
@@ -62,7 +62,7 @@ public class TransformerFactsTests
     [Fact]
     public void Lv_side_tap_raises_the_lv_voltage()
     {
-        TapChanger Tap(int position) => new() { Side = TapSide.Lv, StepPercent = 1.25, Min = -8, Max = 8, Position = position };
+        TapChanger Tap(int position) => new() { Winding = TapWinding.Lv, PercentPerStep = 1.25, Range = new(-8, 8), Position = position };
         double V(int position) => Solve(SmallNetworks.Transformer132To33(loadMw: 1, tap: Tap(position))).Buses.Single(b => b.Id == "LV").VPu;
         Assert.InRange(V(1) / V(0) - 1, 0.0125 * 0.95, 0.0125 * 1.05);
     }

@@ -67,7 +67,7 @@ public class BranchRulesTests
     }
 
     [Fact]
-    public void A_line_with_no_impedance_or_a_mix_of_forms_is_an_error()
+    public void A_line_with_no_impedance_or_per_km_data_without_a_length_is_an_error()
     {
         Network net = Clean();
         net = net with
@@ -76,13 +76,12 @@ public class BranchRulesTests
             [
                 .. net.Lines,
                 new Line { Id = "F2", From = "MAIN", To = "QUARREND", RatingMva = 20 },
-                new Line { Id = "F3", From = "MAIN", To = "QUARREND", LengthKm = 3, ROhmPerKm = 0.1, XOhmPerKm = 0.3, XPu = 0.01 },
+                new Line { Id = "F3", From = "MAIN", To = "QUARREND", Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.1, X = 0.3 } },
             ],
         };
         ValidationReport report = NetworkValidator.Validate(net);
-        Assert.Contains("gives no impedance", Single(report, ElementKind.Line, "F2", null!).Message);
-        Problem mix = Single(report, ElementKind.Line, "F3", "xPu");
-        Assert.Contains("mixes impedance forms: per km (rOhmPerKm, xOhmPerKm) and per unit (xPu)", mix.Message);
+        Assert.Contains("gives no impedance", Single(report, ElementKind.Line, "F2", "z1").Message);
+        Assert.Contains("z1 is given per km but the line has no km", Single(report, ElementKind.Line, "F3", "km").Message);
     }
 
     [Fact]
@@ -101,11 +100,11 @@ public class BranchRulesTests
         Network net = Clean();
         net = net with
         {
-            Lines = [.. net.Lines, new Line { Id = "TIE", From = "MAIN", To = "QUARREND", ROhm = 0, XOhm = 0 }],
+            Lines = [.. net.Lines, new Line { Id = "TIE", From = "MAIN", To = "QUARREND", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 0, X = 0 } }],
             Transformers = net.Transformers.Change(1, t => t with { ZPercent = 0 }),
         };
         ValidationReport report = NetworkValidator.Validate(net);
-        Assert.Contains("belongs in a bus merge, not a branch", Single(report, ElementKind.Line, "TIE", "xOhm").Message);
+        Assert.Contains("belongs in a bus merge, not a branch", Single(report, ElementKind.Line, "TIE", "z1.x").Message);
         Assert.Contains("belongs in a bus merge, not a branch", Single(report, ElementKind.Transformer, "T2", "zPercent").Message);
     }
 
@@ -113,21 +112,21 @@ public class BranchRulesTests
     public void Negative_series_reactance_is_a_warning_not_an_error()
     {
         Network net = PerUnitOnly();
-        net = net with { Lines = net.Lines.Change(1, l => l with { XPu = -0.02 }) };
+        net = net with { Lines = net.Lines.Change(1, l => l with { Z1 = l.Z1! with { X = -0.02 } }) };
         ValidationReport report = NetworkValidator.Validate(net);
-        Problem p = Single(report, ElementKind.Line, "2-3", "xPu");
+        Problem p = Single(report, ElementKind.Line, "2-3", "z1.x");
         Assert.Equal(Severity.Warning, p.Severity);
         Assert.False(report.HasErrors, report.Describe());
     }
 
     [Fact]
-    public void A_line_with_reactance_but_no_resistance_is_incomplete()
+    public void A_zero_sequence_of_zero_impedance_is_an_error()
     {
         Network net = Clean();
-        net = net with { Lines = net.Lines.Change(0, l => l with { ROhmPerKm = null }) };
-        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Line, "F1", "rOhmPerKm");
+        net = net with { Lines = net.Lines.Change(0, l => l with { Z0 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0, X = 0 } }) };
+        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Line, "F1", "z0.x");
         Assert.Equal(Severity.Error, p.Severity);
-        Assert.Contains("give rOhmPerKm and xOhmPerKm together", p.Message);
+        Assert.Contains("z0 is zero", p.Message);
     }
 
     [Fact]
@@ -143,10 +142,10 @@ public class BranchRulesTests
     public void A_line_length_of_zero_is_an_error()
     {
         Network net = Clean();
-        net = net with { Lines = net.Lines.Change(0, l => l with { LengthKm = 0 }) };
-        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Line, "F1", "lengthKm");
+        net = net with { Lines = net.Lines.Change(0, l => l with { Km = 0 }) };
+        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Line, "F1", "km");
         Assert.Equal(Severity.Error, p.Severity);
-        Assert.Contains("lengthKm is 0", p.Message);
+        Assert.Contains("km is 0", p.Message);
     }
 
     [Fact]
@@ -157,21 +156,21 @@ public class BranchRulesTests
         {
             Transformers = net.Transformers
                 .Change(0, t => t with { Tap = t.Tap! with { Position = 9 } })
-                .Change(1, t => t with { Tap = new TapChanger { StepPercent = 0, Min = -2, Max = 2 } }),
+                .Change(1, t => t with { Tap = new TapChanger { PercentPerStep = 0, Range = new(-2, 2) } }),
         };
         ValidationReport report = NetworkValidator.Validate(net);
-        Assert.Contains("tap.position 9 is outside the range -8..8", Single(report, ElementKind.Transformer, "T1", "tap.position").Message);
-        Assert.Contains("tap.stepPercent is 0 with a range -2..2", Single(report, ElementKind.Transformer, "T2", "tap.stepPercent").Message);
+        Assert.Contains("tap.position 9 is outside the range [-8, 8]", Single(report, ElementKind.Transformer, "T1", "tap.position").Message);
+        Assert.Contains("tap.percentPerStep is 0 with a range [-2, 2]", Single(report, ElementKind.Transformer, "T2", "tap.percentPerStep").Message);
     }
 
     [Fact]
     public void Tap_range_upside_down_is_an_error_and_a_large_step_a_warning()
     {
         Network net = Clean();
-        net = net with { Transformers = net.Transformers.Change(0, t => t with { Tap = t.Tap! with { Min = 8, Max = -8, StepPercent = 10 } }) };
+        net = net with { Transformers = net.Transformers.Change(0, t => t with { Tap = t.Tap! with { Range = new(8, -8), PercentPerStep = 10 } }) };
         ValidationReport report = NetworkValidator.Validate(net);
-        Assert.Equal(Severity.Error, Single(report, ElementKind.Transformer, "T1", "tap.min").Severity);
-        Assert.Equal(Severity.Warning, Single(report, ElementKind.Transformer, "T1", "tap.stepPercent").Severity);
+        Assert.Equal(Severity.Error, Single(report, ElementKind.Transformer, "T1", "tap.range").Severity);
+        Assert.Equal(Severity.Warning, Single(report, ElementKind.Transformer, "T1", "tap.percentPerStep").Severity);
     }
 
     [Fact]

@@ -53,11 +53,11 @@ public class BusAndSourceRulesTests
         net = net with
         {
             Buses = net.Buses.Change(0, b => b with { VMin = double.NaN }),
-            Lines = net.Lines.Change(0, l => l with { XOhmPerKm = double.PositiveInfinity }),
+            Lines = net.Lines.Change(0, l => l with { Z1 = l.Z1! with { X = double.PositiveInfinity } }),
         };
         ValidationReport report = NetworkValidator.Validate(net);
         Assert.Equal("vMin is NaN: give a finite number", Single(report, ElementKind.Bus, "GRID", "vMin").Message);
-        Assert.Contains("xOhmPerKm is Infinity", Single(report, ElementKind.Line, "F1", "xOhmPerKm").Message);
+        Assert.Contains("z1.x is Infinity", Single(report, ElementKind.Line, "F1", "z1.x").Message);
     }
 
     [Fact]

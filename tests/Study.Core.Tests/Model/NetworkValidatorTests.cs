@@ -48,7 +48,7 @@ public class NetworkValidatorTests
         {
             Buses = net.Buses.Change(1, b => b with { VMin = 1.1 }),
             Loads = net.Loads.Change(0, l => l with { Bus = "MILL2" }),
-            Lines = net.Lines.Change(0, l => l with { LengthKm = -1 }),
+            Lines = net.Lines.Change(0, l => l with { Km = -1 }),
             Transformers = net.Transformers.Change(0, t => t with { HvKv = 132000 }),
             Generators = net.Generators.Change(0, g => g with { QMinMvar = 9 }),
             Scenarios = net.Scenarios.Change(0, s => s with { LoadScale = -1 }),
@@ -58,7 +58,7 @@ public class NetworkValidatorTests
         var found = report.Errors.Select(p => (p.Kind, p.ElementId, p.Field)).ToHashSet();
         Assert.Contains((ElementKind.Bus, "MAIN", "vMin"), found);
         Assert.Contains((ElementKind.Load, "L1", "bus"), found);
-        Assert.Contains((ElementKind.Line, "F1", "lengthKm"), found);
+        Assert.Contains((ElementKind.Line, "F1", "km"), found);
         Assert.Contains((ElementKind.Transformer, "T1", "hvKv"), found);
         Assert.Contains((ElementKind.Generator, "G1", "qMinMvar"), found);
         Assert.Contains((ElementKind.Scenario, "peak", "loadScale"), found);
@@ -117,7 +117,7 @@ public class NetworkValidatorTests
         net = net with
         {
             Transformers = net.Transformers.Change(0, t => t with { HvKv = 132000 }),
-            Lines = [.. net.Lines, new Line { Id = "T2", From = "MAIN", To = "QUARREND", RPu = 0.002, XPu = 0.01 }],
+            Lines = [.. net.Lines, new Line { Id = "T2", From = "MAIN", To = "QUARREND", Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = 0.002, X = 0.01 } }],
         };
         IReadOnlyList<Problem> t1 = NetworkValidator.ValidateElement(net, ElementKind.Transformer, "T1");
         Problem only = Assert.Single(t1);

@@ -26,7 +26,7 @@ internal static class ValidationNetworks
         Shunts = [new Shunt { Id = "C1", Bus = "QUARREND", QMvar = 4 }],
         Lines =
         [
-            new Line { Id = "F1", From = "MAIN", To = "QUARREND", LengthKm = 5.2, ROhmPerKm = 0.12, XOhmPerKm = 0.38, BUsPerKm = 3.0, RatingMva = 30 },
+            new Line { Id = "F1", From = "MAIN", To = "QUARREND", Km = 5.2, Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.12, X = 0.38, B = 3.0 }, RatingMva = 30 },
         ],
         Transformers =
         [
@@ -35,7 +35,7 @@ internal static class ValidationNetworks
                 Id = "T1", Hv = "GRID", Lv = "MAIN", Mva = 60, HvKv = 132, LvKv = 33, ZPercent = 12.5, Xr = 25, VectorGroup = "YNd11",
                 Tap = new TapChanger
                 {
-                    Side = TapSide.Hv, StepPercent = 1.25, Min = -8, Max = 8,
+                    Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-8, 8),
                     Regulate = new TapRegulation { Bus = "MAIN", VTarget = 1.0, BandPu = 0.015 },
                 },
             },
@@ -58,8 +58,8 @@ internal static class ValidationNetworks
         Loads = [new Load { Id = "L3", Bus = "3", PMw = 94.2, QMvar = 19 }, new Load { Id = "L4", Bus = "4", PMw = 47.8, QMvar = -3.9 }],
         Lines =
         [
-            new Line { Id = "1-2", From = "1", To = "2", RPu = 0.01938, XPu = 0.05917, BPu = 0.0528 },
-            new Line { Id = "2-3", From = "2", To = "3", RPu = 0.04699, XPu = 0.19797, BPu = 0.0438 },
+            new Line { Id = "1-2", From = "1", To = "2", Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = 0.01938, X = 0.05917, B = 0.0528 } },
+            new Line { Id = "2-3", From = "2", To = "3", Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = 0.04699, X = 0.19797, B = 0.0438 } },
         ],
         Transformers = [new Transformer { Id = "3-4", Hv = "3", Lv = "4", RPu = 0, XPu = 0.20912, Ratio = 0.978 }],
     };

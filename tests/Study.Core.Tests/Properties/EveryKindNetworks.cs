@@ -21,7 +21,7 @@ internal static class EveryKindNetworks
         return new Network
         {
             Name = t.Text(),
-            Version = t.Chance(90) ? 1 : t.Int(-3, 1),
+            Version = Network.CurrentVersion,
             BaseMva = Number(t, 1, 1000),
             FrequencyHz = t.Chance(70) ? 50 : Number(t, 1, 400),
             Buses = buses,
@@ -110,8 +110,8 @@ internal static class EveryKindNetworks
         int min = t.Int(-16, 0), max = t.Int(0, 16);
         return new TapChanger
         {
-            Side = withMv ? t.Pick([TapSide.Hv, TapSide.Mv, TapSide.Lv]) : t.Pick([TapSide.Hv, TapSide.Lv]),
-            StepPercent = Number(t, 0.5, 2.5), Min = min, Max = max, Neutral = t.Chance(80) ? 0 : t.Int(min, max),
+            Winding = withMv ? t.Pick([TapWinding.Hv, TapWinding.Mv, TapWinding.Lv]) : t.Pick([TapWinding.Hv, TapWinding.Lv]),
+            PercentPerStep = Number(t, 0.5, 2.5), Range = new(min, max),
             Position = t.Int(min, max),
             Regulate = t.Chance(50)
                 ? new TapRegulation { Bus = regulatedBus, VTarget = Number(t, 0.95, 1.05), BandPu = Number(t, 0.005, 0.05) }
@@ -119,28 +119,22 @@ internal static class EveryKindNetworks
         };
     }
 
-    /// <summary>One of the three impedance forms, each key present or absent on its own.</summary>
-    private static Line Line(Tape t, int i, string from, string to)
+    /// <summary>A line with each sequence on a basis of its own (or absent), and the length present or absent.</summary>
+    private static Line Line(Tape t, int i, string from, string to) => new()
     {
-        var line = new Line { Id = t.Id("F", i), From = from, To = to, RatingMva = Optional(t, 1, 200), InService = t.Chance(80) };
-        return t.Int(0, 2) switch
+        Id = t.Id("F", i), From = from, To = to, Km = Optional(t, 0.1, 40, 80), RatingMva = Optional(t, 1, 200), InService = t.Chance(80),
+        Z1 = t.Chance(95) ? Sequence(t, 0.01, 1, 0.05, 0.5, 300) : null,
+        Z0 = t.Chance(60) ? Sequence(t, 0.05, 2, 0.1, 2, 200) : null,
+    };
+
+    private static SequenceImpedance Sequence(Tape t, double rLow, double rHigh, double xLow, double xHigh, double bHigh)
+    {
+        ImpedanceBasis per = t.Pick([ImpedanceBasis.PerKm, ImpedanceBasis.WholeLine, ImpedanceBasis.PerUnit]);
+        double scale = per == ImpedanceBasis.PerUnit ? 0.2 : per == ImpedanceBasis.WholeLine ? 10 : 1;
+        return new SequenceImpedance
         {
-            0 => line with
-            {
-                LengthKm = Optional(t, 0.1, 40, 90), ROhmPerKm = Optional(t, 0.01, 1, 90), XOhmPerKm = Optional(t, 0.05, 0.5, 90),
-                BUsPerKm = Optional(t, 0, 300), R0OhmPerKm = Optional(t, 0.05, 2), X0OhmPerKm = Optional(t, 0.1, 2),
-                B0UsPerKm = Optional(t, 0, 200),
-            },
-            1 => line with
-            {
-                ROhm = Optional(t, 0.01, 20, 90), XOhm = Optional(t, 0.05, 40, 90), BUs = Optional(t, 0, 3000),
-                R0Ohm = Optional(t, 0.05, 50), X0Ohm = Optional(t, 0.1, 80), B0Us = Optional(t, 0, 2000),
-            },
-            _ => line with
-            {
-                RPu = Optional(t, 0, 0.2, 90), XPu = Optional(t, -0.1, 0.5, 90), BPu = Optional(t, 0, 0.5),
-                R0Pu = Optional(t, 0, 0.5), X0Pu = Optional(t, 0, 1), B0Pu = Optional(t, 0, 0.3),
-            },
+            Per = per, R = Number(t, rLow * scale, rHigh * scale), X = Number(t, xLow * scale, xHigh * scale),
+            B = Optional(t, 0, bHigh * (per == ImpedanceBasis.PerUnit ? 0.001 : per == ImpedanceBasis.WholeLine ? 10 : 1)),
         };
     }
 

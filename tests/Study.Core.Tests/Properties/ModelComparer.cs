@@ -16,17 +16,17 @@ internal static class ModelComparer
     {
         if (a is null || b is null) return a is null && b is null ? null : $"{path}: {Show(a)} vs {Show(b)}";
         Type type = a.GetType();
+        // Lists compare entry by entry whatever their concrete type (an absent array reads as an empty one).
+        if (a is IList first && b is IList second)
+        {
+            if (first.Count != second.Count) return $"{path}: {first.Count} entries vs {second.Count}";
+            for (int i = 0; i < first.Count; i++)
+                if (FirstDifference(first[i], second[i], $"{path}[{i}]") is string d) return d;
+            return null;
+        }
         if (type != b.GetType()) return $"{path}: type {type.Name} vs {b.GetType().Name}";
         if (a is double x) return BitConverter.DoubleToInt64Bits(x) == BitConverter.DoubleToInt64Bits((double)b) ? null : $"{path}: {x:R} vs {(double)b:R}";
         if (a is string || type.IsPrimitive || type.IsEnum) return Equals(a, b) ? null : $"{path}: {Show(a)} vs {Show(b)}";
-        if (a is IList la)
-        {
-            var lb = (IList)b;
-            if (la.Count != lb.Count) return $"{path}: {la.Count} entries vs {lb.Count}";
-            for (int i = 0; i < la.Count; i++)
-                if (FirstDifference(la[i], lb[i], $"{path}[{i}]") is string d) return d;
-            return null;
-        }
         foreach (PropertyInfo p in type.GetProperties(BindingFlags.Public | BindingFlags.Instance))
         {
             if (p.GetIndexParameters().Length > 0 || p.GetCustomAttribute<JsonIgnoreAttribute>() is not null) continue;

@@ -34,8 +34,8 @@ public class RoundTripProperties
             "\"supplies\"", "\"generators\"", "\"loads\"", "\"shunts\"", "\"lines\"", "\"transformers\"",
             "\"threeWindingTransformers\"", "\"breakers\"", "\"scenarios\"", "\"publishedSolution\"", "\"tap\"",
             "\"regulate\"", "\"noLoad\"", "\"neutral\"", "\"hvNeutral\"", "\"mvNeutral\"", "\"zip\"", "\"inService\": false",
-            "\"rOhmPerKm\"", "\"rOhm\"", "\"rPu\"", "\"ratio\"", "\"zPercent\"", "\"z0z1\"", "\"generationScale\"", "\"mode\": \"pq\"",
-            "\"side\": \"mv\"",
+            "\"per\": \"km\"", "\"per\": \"line\"", "\"per\": \"pu\"", "\"z0\"", "\"km\"", "\"rPu\"", "\"ratio\"", "\"zPercent\"",
+            "\"z0z1\"", "\"generationScale\"", "\"mode\": \"pq\"", "\"winding\": \"mv\"", "\"range\": [",
         ];
         foreach (string key in keys) Assert.Contains(key, all);
     }

@@ -94,8 +94,11 @@ internal static class SmallSolvableNetworks
     /// <summary>A cable with positive r and x per km, and some charging.</summary>
     private static Line Cable(Tape t, string id, Bus from, Bus to) => new()
     {
-        Id = id, From = from.Id, To = to.Id, LengthKm = t.Double(0.2, 10, 2),
-        ROhmPerKm = t.Double(0.05, 0.5), XOhmPerKm = t.Double(0.08, 0.45), BUsPerKm = t.Chance(50) ? t.Double(0, 60) : null,
+        Id = id, From = from.Id, To = to.Id, Km = t.Double(0.2, 10, 2),
+        Z1 = new SequenceImpedance
+        {
+            Per = ImpedanceBasis.PerKm, R = t.Double(0.05, 0.5), X = t.Double(0.08, 0.45), B = t.Chance(50) ? t.Double(0, 60) : null,
+        },
         RatingMva = t.Chance(50) ? t.Double(5, 40, 1) : null,
     };
 
@@ -108,7 +111,7 @@ internal static class SmallSolvableNetworks
             int min = -t.Int(2, 8), max = t.Int(2, 8);
             tap = new TapChanger
             {
-                Side = t.Chance(80) ? TapSide.Hv : TapSide.Lv, StepPercent = t.Double(0.625, 2.5, 3), Min = min, Max = max,
+                Winding = t.Chance(80) ? TapWinding.Hv : TapWinding.Lv, PercentPerStep = t.Double(0.625, 2.5, 3), Range = new(min, max),
                 Position = t.Int(min, max),
                 Regulate = t.Chance(40) ? new TapRegulation { Bus = lv.Id, VTarget = t.Double(0.98, 1.02), BandPu = t.Double(0.02, 0.04) } : null,
             };

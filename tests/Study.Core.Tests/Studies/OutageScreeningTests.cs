@@ -20,9 +20,9 @@ public class OutageScreeningTests
         Supplies = [new Supply { Id = "GRID", Bus = "S", ScMvaMax = 2000, Xr = 10 }],
         Lines =
         [
-            new Line { Id = "A1", From = "S", To = "A", ROhm = 0.5, XOhm = 1.0, RatingMva = feederRatingMva },
-            new Line { Id = "A2", From = "S", To = "A", ROhm = 0.5, XOhm = 1.0, RatingMva = feederRatingMva },
-            new Line { Id = "B1", From = "A", To = "B", ROhm = 0.4, XOhm = 0.8, RatingMva = 10 },
+            new Line { Id = "A1", From = "S", To = "A", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 0.5, X = 1.0 }, RatingMva = feederRatingMva },
+            new Line { Id = "A2", From = "S", To = "A", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 0.5, X = 1.0 }, RatingMva = feederRatingMva },
+            new Line { Id = "B1", From = "A", To = "B", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 0.4, X = 0.8 }, RatingMva = 10 },
         ],
         Loads = [new Load { Id = "LA", Bus = "A", PMw = 12, QMvar = 3 }, new Load { Id = "LB", Bus = "B", PMw = 3, QMvar = 1 }],
     };

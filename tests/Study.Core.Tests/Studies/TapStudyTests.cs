@@ -26,7 +26,7 @@ public class TapStudyTests
         // The hand sweep: set the position in the file, solve each scenario, read the watched buses.
         var handPassing = new List<int>();
         Transformer bank = n.Transformers.Single(t => t.Id == "CQ-T1");
-        for (int p = bank.Tap!.Min; p <= bank.Tap.Max; p++)
+        for (int p = bank.Tap!.Range.Lowest; p <= bank.Tap.Range.Highest; p++)
         {
             var at = n with { Transformers = n.Transformers.Select(t => t.Id == "CQ-T1" ? t with { Tap = t.Tap! with { Position = p } } : t).ToList() };
             bool inBand = true;

@@ -13,11 +13,11 @@ public class ExplainerTests
         Supplies = [new Supply { Id = "GRID", Bus = "B0", ScMvaMax = 3000, ScMvaMin = 2000, Xr = 12 }],
         Transformers =
         [
-            TransformerImpedanceTests.Bank132To33(new TapChanger { Side = TapSide.Hv, StepPercent = 1.25, Min = -8, Max = 8, Position = 2 })
+            TransformerImpedanceTests.Bank132To33(new TapChanger { Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-8, 8), Position = 2 })
                 with { NoLoad = new NoLoadLoss { I0Percent = 0.3, P0Kw = 40 } },
         ],
         ThreeWindingTransformers = [ThreeWindingStarTests.Bank() with { Hv = "B0", Mv = "B1", Lv = "B3" }],
-        Lines = [new Line { Id = "F1", From = "B1", To = "B2", LengthKm = 5.2, ROhmPerKm = 0.12, XOhmPerKm = 0.38, BUsPerKm = 3 }],
+        Lines = [new Line { Id = "F1", From = "B1", To = "B2", Km = 5.2, Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.12, X = 0.38, B = 3 } }],
         Loads = [new Load { Id = "L1", Bus = "B1", PMw = 12, QMvar = 4 }],
         Shunts = [new Shunt { Id = "C1", Bus = "B1", QMvar = 4 }],
         Generators = [new Generator { Id = "G1", Bus = "B3", PMw = 8, Mva = 10, Kv = 11, XdppPu = 0.18 }],

@@ -20,15 +20,15 @@ public class PerUnitModelBuildTests
         Generators = [new Generator { Id = "G1", Bus = "B2", Mode = GeneratorMode.Pv, PMw = 8, VSet = 1.01, Mva = 10, Kv = 33, XdppPu = 0.18 }],
         Lines =
         [
-            new Line { Id = "F1", From = "B1", To = "B2", LengthKm = 5.2, ROhmPerKm = 0.12, XOhmPerKm = 0.38, BUsPerKm = 3 },
-            new Line { Id = "F2", From = "B1", To = "B2", LengthKm = 5.2, ROhmPerKm = 0.12, XOhmPerKm = 0.38, InService = false },
-            new Line { Id = "FX", From = "B1", To = "BX", ROhm = 1, XOhm = 2 },
+            new Line { Id = "F1", From = "B1", To = "B2", Km = 5.2, Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.12, X = 0.38, B = 3 } },
+            new Line { Id = "F2", From = "B1", To = "B2", Km = 5.2, Z1 = new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = 0.12, X = 0.38 }, InService = false },
+            new Line { Id = "FX", From = "B1", To = "BX", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 1, X = 2 } },
         ],
         Transformers =
         [
             TransformerImpedanceTests.Bank132To33(new TapChanger
             {
-                Side = TapSide.Hv, StepPercent = 1.25, Min = -8, Max = 8, Position = 0,
+                Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-8, 8), Position = 0,
                 Regulate = new TapRegulation { Bus = "B1", VTarget = 1.0, BandPu = 0.015 },
             }),
         ],
@@ -124,13 +124,13 @@ public class PerUnitModelBuildTests
     // PuTap.RatioAt must agree with the nameplate formula at every position, on either side, including
     // a winding rated off its bus kV and a three-winding lv tap (DEVELOPERS.md, Per-unit rules).
     [Theory]
-    [InlineData(TapSide.Hv, 33.0)]
-    [InlineData(TapSide.Lv, 33.0)]
-    [InlineData(TapSide.Hv, 34.5)]
-    [InlineData(TapSide.Lv, 31.5)]
-    public void Tap_ratio_at_any_position_matches_a_fresh_conversion(TapSide side, double lvKv)
+    [InlineData(TapWinding.Hv, 33.0)]
+    [InlineData(TapWinding.Lv, 33.0)]
+    [InlineData(TapWinding.Hv, 34.5)]
+    [InlineData(TapWinding.Lv, 31.5)]
+    public void Tap_ratio_at_any_position_matches_a_fresh_conversion(TapWinding side, double lvKv)
     {
-        var tap = new TapChanger { Side = side, StepPercent = 1.25, Min = -8, Max = 8, Neutral = 1, Position = 0 };
+        var tap = new TapChanger { Winding = side, PercentPerStep = 1.25, Range = new(-8, 8), Position = 0 };
         var network = Sample() with { Transformers = [TransformerImpedanceTests.Bank132To33(tap) with { LvKv = lvKv }] };
         var m = PerUnitModel.Build(network);
         for (int p = -8; p <= 8; p++)
@@ -143,7 +143,7 @@ public class PerUnitModelBuildTests
     [Fact]
     public void A_three_winding_lv_tap_steps_the_lv_winding_branch()
     {
-        var tap = new TapChanger { Side = TapSide.Lv, StepPercent = 2.5, Min = -2, Max = 2, Position = 0 };
+        var tap = new TapChanger { Winding = TapWinding.Lv, PercentPerStep = 2.5, Range = new(-2, 2), Position = 0 };
         var network = Sample() with { Transformers = [], ThreeWindingTransformers = [Sample().ThreeWindingTransformers[0] with { Tap = tap }] };
         var m = PerUnitModel.Build(network);
         var t = m.Taps.Single();
@@ -162,7 +162,7 @@ public class PerUnitModelBuildTests
         var network = new Network
         {
             Buses = [new Bus { Id = "1" }, new Bus { Id = "2" }],
-            Lines = [new Line { Id = "1-2", From = "1", To = "2", ROhm = 1, XOhm = 3 }],
+            Lines = [new Line { Id = "1-2", From = "1", To = "2", Z1 = new SequenceImpedance { Per = ImpedanceBasis.WholeLine, R = 1, X = 3 } }],
         };
         var e = Assert.Throws<InputException>(() => PerUnitModel.Build(network));
         Assert.Equal("1-2", e.ElementId);

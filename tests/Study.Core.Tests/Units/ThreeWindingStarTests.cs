@@ -35,7 +35,7 @@ public class ThreeWindingStarTests
     {
         var plain = Convert(Bank());
         Assert.All(plain.Windings, w => Assert.Equal(1.0, w.Ratio, 12));
-        var tapped = Convert(Bank(new TapChanger { Side = TapSide.Lv, StepPercent = 2.5, Min = -2, Max = 2, Position = 1 }));
+        var tapped = Convert(Bank(new TapChanger { Winding = TapWinding.Lv, PercentPerStep = 2.5, Range = new(-2, 2), Position = 1 }));
         Assert.Equal(1.0, tapped.Hv.Ratio, 12);
         Assert.Equal(1.0, tapped.Mv.Ratio, 12);
         Assert.Equal(1.025, tapped.Lv.Ratio, 12);

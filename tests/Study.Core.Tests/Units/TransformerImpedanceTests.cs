@@ -34,14 +34,14 @@ public class TransformerImpedanceTests
     [Fact]
     public void Two_hv_tap_steps_of_1_25_percent_give_a_ratio_of_1_025()
     {
-        var c = TransformerImpedance.Convert(Bank132To33(new TapChanger { Side = TapSide.Hv, StepPercent = 1.25, Min = -8, Max = 8, Position = 2 }), Hv132, Lv33, 100);
+        var c = TransformerImpedance.Convert(Bank132To33(new TapChanger { Winding = TapWinding.Hv, PercentPerStep = 1.25, Range = new(-8, 8), Position = 2 }), Hv132, Lv33, 100);
         Assert.Equal(1.025, c.Ratio, 12);
     }
 
     [Fact]
     public void Two_lv_tap_steps_of_1_25_percent_give_a_ratio_of_1_over_1_025()
     {
-        var c = TransformerImpedance.Convert(Bank132To33(new TapChanger { Side = TapSide.Lv, StepPercent = 1.25, Min = -8, Max = 8, Position = 2 }), Hv132, Lv33, 100);
+        var c = TransformerImpedance.Convert(Bank132To33(new TapChanger { Winding = TapWinding.Lv, PercentPerStep = 1.25, Range = new(-8, 8), Position = 2 }), Hv132, Lv33, 100);
         Assert.Equal(1 / 1.025, c.Ratio, 12);
     }
 

@@ -29,7 +29,7 @@ public sealed class CheckCommand : Command
         int errors = report.Problems.Count(p => p.Severity == Severity.Error);
         int warnings = report.Problems.Count - errors;
         var doc = new ReportDocument($"{path}: {NetworkSummary.Describe(network)}")
-            .List(report.Problems.Select(p => p.Describe()))
+            .List(network.Source.Notes.Select(n => "note: " + n).Concat(report.Problems.Select(p => p.Describe())))
             .Text(errors == 0 && warnings == 0
                 ? "clean: no errors, no warnings"
                 : $"{errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");

@@ -18,6 +18,7 @@ public static class NetworkLoading
     public static StudyCase Open(string path, TextWriter err, StageClock? clock = null)
     {
         StudyCase study = StudyCase.Open(path, clock is null ? null : clock.Lap);
+        foreach (string note in study.Network.Source.Notes) err.WriteLine("note: " + note);
         IReadOnlyList<Problem> warnings = study.Warnings;
         foreach (Problem w in warnings.Take(ShownWarnings)) err.WriteLine(w.Describe());
         if (warnings.Count > ShownWarnings)

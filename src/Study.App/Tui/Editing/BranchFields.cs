@@ -6,27 +6,51 @@ namespace Study.App.Tui.Editing;
 /// <summary>Form and table fields of lines and transformers. Blank optional values are "not given".</summary>
 public static class BranchFields
 {
+    /// <summary>The basis spelled as the file spells it: per km, for the whole line, or system per unit.</summary>
+    private static readonly (ImpedanceBasis Value, string Text)[] Bases =
+        [(ImpedanceBasis.PerKm, "km"), (ImpedanceBasis.WholeLine, "line"), (ImpedanceBasis.PerUnit, "pu")];
+
     public static IReadOnlyList<ElementField> Line { get; } =
     [
         Field.Id<Line>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Line>("From", e => e.From, (e, v) => e with { From = v }),
-        Field.Id<Line>("To", e => e.To, (e, v) => e with { To = v }),
-        Field.Optional<Line>("Length", "km", "", e => e.LengthKm, (e, v) => e with { LengthKm = v }),
-        Field.Optional<Line>("R", "Ω/km", "", e => e.ROhmPerKm, (e, v) => e with { ROhmPerKm = v }),
-        Field.Optional<Line>("X", "Ω/km", "", e => e.XOhmPerKm, (e, v) => e with { XOhmPerKm = v }),
-        Field.Optional<Line>("B", "µS/km", "0", e => e.BUsPerKm, (e, v) => e with { BUsPerKm = v }),
+        Field.Id<Line>("From bus", e => e.From, (e, v) => e with { From = v }),
+        Field.Id<Line>("To bus", e => e.To, (e, v) => e with { To = v }),
+        Field.Optional<Line>("Length", "km", "", e => e.Km, (e, v) => e with { Km = v }),
+        .. SequenceFields("1", "Positive seq.", e => e.Z1, (e, z) => e with { Z1 = z }),
         Field.Optional<Line>("Rating", "MVA", "none", e => e.RatingMva, (e, v) => e with { RatingMva = v }),
-        Field.Optional<Line>("R0", "Ω/km", "", e => e.R0OhmPerKm, (e, v) => e with { R0OhmPerKm = v }),
-        Field.Optional<Line>("X0", "Ω/km", "", e => e.X0OhmPerKm, (e, v) => e with { X0OhmPerKm = v }),
-        Field.Optional<Line>("B0", "µS/km", "", e => e.B0UsPerKm, (e, v) => e with { B0UsPerKm = v }),
-        Field.Optional<Line>("R total", "Ω", "", e => e.ROhm, (e, v) => e with { ROhm = v }),
-        Field.Optional<Line>("X total", "Ω", "", e => e.XOhm, (e, v) => e with { XOhm = v }),
-        Field.Optional<Line>("B total", "µS", "", e => e.BUs, (e, v) => e with { BUs = v }),
-        Field.Optional<Line>("R", "pu", "", e => e.RPu, (e, v) => e with { RPu = v }),
-        Field.Optional<Line>("X", "pu", "", e => e.XPu, (e, v) => e with { XPu = v }),
-        Field.Optional<Line>("B", "pu", "", e => e.BPu, (e, v) => e with { BPu = v }),
+        .. SequenceFields("0", "Zero seq.", e => e.Z0, (e, z) => e with { Z0 = z }),
         Field.Flag<Line>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
     ];
+
+    /// <summary>
+    /// One sequence of a line: its basis, then R, X and B in the basis's units (Ω/km and µS/km per km, Ω
+    /// and µS for the whole line, pu). Blank R and X mean "not given"; B blank is no charging.
+    /// </summary>
+    private static IEnumerable<ElementField> SequenceFields(string n, string title,
+        Func<Line, SequenceImpedance?> get, Func<Line, SequenceImpedance?, Line> set)
+    {
+        // Every field writes into the sequence (made blank when absent); Normalise drops it again when
+        // nothing was given, after the whole form has been read.
+        Line Edit(Line e, Func<SequenceImpedance, SequenceImpedance> change) =>
+            set(e, change(get(e) ?? new SequenceImpedance { Per = ImpedanceBasis.PerKm, R = double.NaN, X = double.NaN }));
+        static double? Given(double v) => double.IsNaN(v) ? null : v;
+        return
+        [
+            Field.Named<Line, ImpedanceBasis>($"{title} per", Bases, ImpedanceBasis.PerKm, e => get(e)?.Per ?? ImpedanceBasis.PerKm,
+                (e, v) => Edit(e, z => z with { Per = v })),
+            Field.Optional<Line>($"R{n}", "Ω(/km)|pu", "", e => Given(get(e)?.R ?? double.NaN),
+                (e, v) => Edit(e, z => z with { R = v ?? double.NaN })),
+            Field.Optional<Line>($"X{n}", "Ω(/km)|pu", "", e => Given(get(e)?.X ?? double.NaN),
+                (e, v) => Edit(e, z => z with { X = v ?? double.NaN })),
+            Field.Optional<Line>($"B{n}", "µS(/km)|pu", "0", e => get(e)?.B, (e, v) => get(e) is null && v is null ? e : Edit(e, z => z with { B = v })),
+        ];
+    }
+
+    /// <summary>A sequence whose R and X are both blank was not given; half given stays, for the validator to name.</summary>
+    public static Line Normalise(Line line) => line with { Z1 = Normalise(line.Z1), Z0 = Normalise(line.Z0) };
+
+    private static SequenceImpedance? Normalise(SequenceImpedance? z) =>
+        z is not null && double.IsNaN(z.R) && double.IsNaN(z.X) && z.B is null ? null : z;
 
     public static IReadOnlyList<ElementField> Transformer { get; } =
     [

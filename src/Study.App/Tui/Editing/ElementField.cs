@@ -74,6 +74,22 @@ public static class Field
                 return set((T)e, v)!;
             });
 
+    /// <summary>A choice among enum values with the spellings given (the file's own), e.g. km / line / pu.</summary>
+    public static ElementField Named<T, TEnum>(string name, IReadOnlyList<(TEnum Value, string Text)> spellings, TEnum defaultValue,
+        Func<T, TEnum> get, Func<T, TEnum, T> set)
+        where TEnum : struct, Enum
+    {
+        string Spell(TEnum v) => spellings.First(s => EqualityComparer<TEnum>.Default.Equals(s.Value, v)).Text;
+        return new(name, string.Join("/", spellings.Select(s => s.Text)), Spell(defaultValue), e => Spell(get((T)e)), (e, text) =>
+        {
+            string t = text.Trim().ToLowerInvariant();
+            if (t.Length == 0) return set((T)e, defaultValue)!;
+            foreach (var (value, spelled) in spellings)
+                if (spelled == t) return set((T)e, value)!;
+            throw new FormatException($"{name}: one of {string.Join(", ", spellings.Select(s => s.Text))}");
+        });
+    }
+
     private static double Parse(string name, string text)
     {
         if (!double.TryParse(text.Trim(), NumberStyles.Float, Inv, out double v) || !double.IsFinite(v))

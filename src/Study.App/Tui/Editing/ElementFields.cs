@@ -29,6 +29,10 @@ public static class ElementFields
         _ => kind + "s",
     };
 
+    /// <summary>What the form's fields make, tidied once every field is written: a line's blank sequences are "not given".</summary>
+    public static object Finish(ElementKind kind, object element) =>
+        kind == ElementKind.Line ? BranchFields.Normalise((Line)element) : element;
+
     /// <summary>A new element with a free id, connected to the first bus(es), other values at their defaults.</summary>
     public static object New(Network n, ElementKind kind)
     {
@@ -41,7 +45,7 @@ public static class ElementFields
             ElementKind.Generator => new Generator { Id = Id("G"), Bus = Bus(0) },
             ElementKind.Load => new Load { Id = Id("L"), Bus = Bus(0) },
             ElementKind.Shunt => new Shunt { Id = Id("C"), Bus = Bus(0) },
-            ElementKind.Line => new Line { Id = Id("F"), From = Bus(0), To = Bus(1), LengthKm = 1 },
+            ElementKind.Line => new Line { Id = Id("F"), From = Bus(0), To = Bus(1), Km = 1 },
             ElementKind.Transformer => new Transformer { Id = Id("T"), Hv = Bus(0), Lv = Bus(1) },
             ElementKind.ThreeWindingTransformer => new ThreeWindingTransformer { Id = Id("T"), Hv = Bus(0), Mv = Bus(1), Lv = Bus(2) },
             ElementKind.Breaker => new Breaker { Id = Id("CB"), Bus = Bus(0) },

@@ -60,6 +60,7 @@ public sealed class ElementForm
             }
         }
         if (problems.Count > 0) return new FormState(null, problems, []);
+        element = ElementFields.Finish(Kind, element);
 
         string id = ElementLists.Of(Kind).IdOf(element);
         if (!ElementLists.IsIdFree(network, Kind, id, except: OriginalId))

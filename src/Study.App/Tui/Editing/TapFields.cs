@@ -12,24 +12,23 @@ public static class TapFields
         TapRegulation Reg(TapChanger t) => t.Regulate ?? new TapRegulation { Bus = "" };
         return
         [
-            Field.Choice<T, TapSide>("Tap side", TapSide.Hv, e => get(e)?.Side ?? TapSide.Hv, (e, v) => Edit(e, t => t with { Side = v })),
-            Field.Number<T>("Tap step", "%", 0, e => get(e)?.StepPercent ?? 0, (e, v) => Edit(e, t => t with { StepPercent = v })),
-            Field.Integer<T>("Tap min", "", 0, e => get(e)?.Min ?? 0, (e, v) => Edit(e, t => t with { Min = v })),
-            Field.Integer<T>("Tap max", "", 0, e => get(e)?.Max ?? 0, (e, v) => Edit(e, t => t with { Max = v })),
-            Field.Integer<T>("Tap neutral", "", 0, e => get(e)?.Neutral ?? 0, (e, v) => Edit(e, t => t with { Neutral = v })),
-            Field.Integer<T>("Tap position", "", 0, e => get(e)?.Position ?? 0, (e, v) => Edit(e, t => t with { Position = v })),
+            Field.Choice<T, TapWinding>("Tapped winding", TapWinding.Hv, e => get(e)?.Winding ?? TapWinding.Hv, (e, v) => Edit(e, t => t with { Winding = v })),
+            Field.Number<T>("Step size", "%", 0, e => get(e)?.PercentPerStep ?? 0, (e, v) => Edit(e, t => t with { PercentPerStep = v })),
+            Field.Integer<T>("Lowest position", "", 0, e => get(e)?.Range.Lowest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Lowest = v } })),
+            Field.Integer<T>("Highest position", "", 0, e => get(e)?.Range.Highest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Highest = v } })),
+            Field.Integer<T>("Present position", "", 0, e => get(e)?.Position ?? 0, (e, v) => Edit(e, t => t with { Position = v })),
             Field.Text<T>("Regulated bus", e => get(e)?.Regulate?.Bus, (e, v) => Edit(e, t => t with
             {
                 Regulate = v is null ? null : Reg(t) with { Bus = v },
             })),
-            Field.Number<T>("V target", "pu", 1, e => get(e)?.Regulate?.VTarget ?? 1,
+            Field.Number<T>("Target voltage", "pu", 1, e => get(e)?.Regulate?.VTarget ?? 1,
                 (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { VTarget = v } })),
-            Field.Number<T>("Band", "pu", 0.015, e => get(e)?.Regulate?.BandPu ?? 0.015,
+            Field.Number<T>("Dead band", "pu", 0.015, e => get(e)?.Regulate?.BandPu ?? 0.015,
                 (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { BandPu = v } })),
         ];
     }
 
     /// <summary>A tap changer with no step, no range and no regulation says nothing: store none.</summary>
     public static TapChanger? Normalise(TapChanger? tap) =>
-        tap is { StepPercent: 0, Min: 0, Max: 0, Position: 0, Neutral: 0, Regulate: null } ? null : tap;
+        tap is { PercentPerStep: 0, Range: { Lowest: 0, Highest: 0 }, Position: 0, Regulate: null } ? null : tap;
 }

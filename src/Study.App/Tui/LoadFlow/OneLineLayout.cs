@@ -50,7 +50,7 @@ public static class OneLineLayout
                     lineDone.Add(l.Id);
                     string other = l.From == bus.Id ? l.To : l.From;
                     string corner = i == lines.Count - 1 ? "└" : "├";
-                    string length = l.LengthKm is double km ? $" {F(km, "0.###")} km" : "";
+                    string length = l.Km is double km ? $" {F(km, "0.###")} km" : "";
                     rows.Add(new($"  │  {corner}─{(l.InService ? "─" : "╳")} {l.Id}{length} ── {other}{Out(l.InService)}"));
                 }
             }
@@ -82,7 +82,7 @@ public static class OneLineLayout
         bool known = taps.TryGetValue(id, out var state);
         string ratio = known ? $"  ratio {F(state.Ratio, "0.0000")}" : "";
         if (tap is null) return ratio;
-        string range = $"[{Labels.Position(tap.Min)}…{Labels.Position(tap.Max)}]";
+        string range = $"[{Labels.Position(tap.Range.Lowest)}…{Labels.Position(tap.Range.Highest)}]";
         string regulates = tap.Regulate is { } reg ? $"  holds {reg.Bus} at {V(reg.VTarget)} pu" : "";
         return $"  tap {Labels.Position(known ? state.Position : tap.Position)} {range}{ratio}{regulates}";
     }

@@ -52,8 +52,8 @@ public sealed class TapStudyForm(Network network, string transformerId, string? 
 
     /// <summary>Transformers (two- and three-winding) that have a tap changer with a range to study.</summary>
     public static IReadOnlyList<string> TappedTransformers(Network network) =>
-        network.Transformers.Where(t => t.Tap is { } tap && tap.Max > tap.Min).Select(t => t.Id)
-            .Concat(network.ThreeWindingTransformers.Where(t => t.Tap is { } tap && tap.Max > tap.Min).Select(t => t.Id))
+        network.Transformers.Where(t => t.Tap is { } tap && tap.Range.Highest > tap.Range.Lowest).Select(t => t.Id)
+            .Concat(network.ThreeWindingTransformers.Where(t => t.Tap is { } tap && tap.Range.Highest > tap.Range.Lowest).Select(t => t.Id))
             .ToList();
 
     private static bool TryNumber(string text, out double v) =>

@@ -1,4 +1,4 @@
-// Which keys of one impedance form an element gives, for "exactly one form" rules.
+// Which keys of one impedance form a transformer gives, for the "exactly one form" rule.
 namespace Study.Core.Model.Validation;
 
 /// <summary>One way of stating an impedance (per km, ohm totals, per unit, nameplate) and the keys given in it.</summary>

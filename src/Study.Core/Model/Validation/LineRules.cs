@@ -1,15 +1,8 @@
-// Line and cable checks: ends, exactly one impedance form, and ohm values only on buses with a base kV.
+// Line and cable checks: ends, the sequence data on its basis, and ohm values only on buses with a base kV.
 namespace Study.Core.Model.Validation;
 
 internal static class LineRules
 {
-    /// <summary>Positive-sequence data is required; zero-sequence data is optional (fault studies only).</summary>
-    private enum Sequence
-    {
-        Positive,
-        Zero,
-    }
-
     /// <summary>A line joins buses of one voltage; beyond this difference a transformer is probably missing.</summary>
     private const double KvMismatch = 0.2;
 
@@ -19,43 +12,20 @@ internal static class LineRules
         Bus? from = at.BusRef("from", line.From);
         Bus? to = at.BusRef("to", line.To);
         at.DistinctEnds("from", line.From, "to", line.To);
-        at.AllFinite(("lengthKm", line.LengthKm), ("rOhmPerKm", line.ROhmPerKm), ("xOhmPerKm", line.XOhmPerKm),
-            ("bUsPerKm", line.BUsPerKm), ("r0OhmPerKm", line.R0OhmPerKm), ("x0OhmPerKm", line.X0OhmPerKm),
-            ("b0UsPerKm", line.B0UsPerKm), ("rOhm", line.ROhm), ("xOhm", line.XOhm), ("bUs", line.BUs),
-            ("r0Ohm", line.R0Ohm), ("x0Ohm", line.X0Ohm), ("b0Us", line.B0Us), ("rPu", line.RPu), ("xPu", line.XPu),
-            ("bPu", line.BPu), ("r0Pu", line.R0Pu), ("x0Pu", line.X0Pu), ("b0Pu", line.B0Pu), ("ratingMva", line.RatingMva));
+        at.AllFinite(("km", line.Km), ("ratingMva", line.RatingMva));
         at.NotNegative("ratingMva", line.RatingMva, "a thermal rating (MVA)");
-        at.Positive("lengthKm", line.LengthKm, "a length (km)");
+        at.Positive("km", line.Km, "a length (km)");
 
-        var perKm = ImpedanceForm.Of("per km", ("rOhmPerKm", line.ROhmPerKm), ("xOhmPerKm", line.XOhmPerKm),
-            ("bUsPerKm", line.BUsPerKm), ("r0OhmPerKm", line.R0OhmPerKm), ("x0OhmPerKm", line.X0OhmPerKm), ("b0UsPerKm", line.B0UsPerKm));
-        var totals = ImpedanceForm.Of("ohm totals", ("rOhm", line.ROhm), ("xOhm", line.XOhm), ("bUs", line.BUs),
-            ("r0Ohm", line.R0Ohm), ("x0Ohm", line.X0Ohm), ("b0Us", line.B0Us));
-        var perUnit = ImpedanceForm.Of("per unit", ("rPu", line.RPu), ("xPu", line.XPu), ("bPu", line.BPu),
-            ("r0Pu", line.R0Pu), ("x0Pu", line.X0Pu), ("b0Pu", line.B0Pu));
-        ImpedanceForm? form = ImpedanceForm.Single(at,
-            "gives no impedance: give rOhmPerKm and xOhmPerKm with lengthKm, or totals rOhm and xOhm, or per-unit rPu and xPu",
-            perKm, totals, perUnit);
+        if (line.Z1 is null)
+            at.Error("z1", "gives no impedance: give z1 with per (\"km\", \"line\" or \"pu\"), r and x");
+        Sequence(at, "z1", line.Z1, line.Km, positive: true);
+        Sequence(at, "z0", line.Z0, line.Km, positive: false);
 
-        if (form == perKm)
-        {
-            if (line.LengthKm is null) at.Error("lengthKm", "gives values per km but no lengthKm: give the route length in km");
-            Complete(at, Sequence.Positive, "rOhmPerKm", line.ROhmPerKm, "xOhmPerKm", line.XOhmPerKm);
-            Complete(at, Sequence.Zero, "r0OhmPerKm", line.R0OhmPerKm, "x0OhmPerKm", line.X0OhmPerKm);
-        }
-        else if (form == totals)
-        {
-            Complete(at, Sequence.Positive, "rOhm", line.ROhm, "xOhm", line.XOhm);
-            Complete(at, Sequence.Zero, "r0Ohm", line.R0Ohm, "x0Ohm", line.X0Ohm);
-        }
-        else if (form == perUnit)
-        {
-            Complete(at, Sequence.Positive, "rPu", line.RPu, "xPu", line.XPu);
-            Complete(at, Sequence.Zero, "r0Pu", line.R0Pu, "x0Pu", line.X0Pu);
-        }
-        if (form is not null && form != perKm && line.LengthKm is double km)
-            at.Warning("lengthKm", $"lengthKm {Numbers.Show(km)} is not used: the impedance is given as {form.Describe()}, not per km");
-        if (form is not null && form != perUnit)
+        bool perKm = line.Z1?.Per == ImpedanceBasis.PerKm || line.Z0?.Per == ImpedanceBasis.PerKm;
+        if (!perKm && line.Km is double km && line.Z1 is not null)
+            at.Warning("km", $"km {Numbers.Show(km)} is not used: the impedance is given per {(line.Z1.Per == ImpedanceBasis.PerUnit ? "unit" : "line")}, not per km");
+        bool inOhm = line.Z1 is { Per: not ImpedanceBasis.PerUnit } || line.Z0 is { Per: not ImpedanceBasis.PerUnit };
+        if (inOhm)
         {
             RequireBaseKv(at, "from", from);
             RequireBaseKv(at, "to", to);
@@ -66,26 +36,22 @@ internal static class LineRules
     }
 
     /// <summary>
-    /// A sequence impedance is r and x together: one without the other is an error, as the per-unit
-    /// conversion cannot guess the missing part; a complete positive sequence then meets the zero and
-    /// negative impedance rules.
+    /// One sequence: finite numbers; per km needs the length; charging not negative. The positive
+    /// sequence then meets the zero and negative impedance rules; a zero-sequence impedance of zero is
+    /// as wrong as a positive one.
     /// </summary>
-    private static void Complete(ElementScope at, Sequence sequence, string rKey, double? r, string xKey, double? x)
+    private static void Sequence(ElementScope at, string key, SequenceImpedance? z, double? km, bool positive)
     {
-        bool positiveSequence = sequence == Sequence.Positive;
-        if (r is null && x is null)
-        {
-            if (positiveSequence) at.Error(xKey, $"{rKey} and {xKey} are missing: give the series resistance and reactance");
-        }
-        else if (r is null || x is null)
-        {
-            string missing = r is null ? rKey : xKey;
-            at.Error(missing, $"{missing} is missing: give {rKey} and {xKey} together (0 where the value is nil)");
-        }
-        else if (positiveSequence)
-        {
-            SeriesImpedance.Check(at, rKey, r, xKey, x);
-        }
+        if (z is null) return;
+        if (!at.AllFinite(($"{key}.r", z.R), ($"{key}.x", z.X), ($"{key}.b", z.B))) return;
+        if (z.Per == ImpedanceBasis.PerKm && km is null)
+            at.Error("km", $"{key} is given per km but the line has no km: give the route length in km");
+        if (positive)
+            SeriesImpedance.Check(at, $"{key}.r", z.R, $"{key}.x", z.X);
+        else if (z.R == 0 && z.X == 0)
+            at.Error($"{key}.x", $"{key} is zero ({key}.r 0, {key}.x 0): give the zero-sequence impedance, or leave {key} out");
+        if (z.B is double b && b < 0)
+            at.Error($"{key}.b", $"{key}.b is {Numbers.Show(b)}: line charging is capacitive, give it as a positive susceptance");
     }
 
     /// <summary>Ohm values need Z_base = kV²/MVA of the bus (DEVELOPERS.md, Per-unit rules).</summary>
@@ -93,6 +59,6 @@ internal static class LineRules
     {
         if (bus is { Kv: 0 })
             at.Error(field, $"bus {bus.Id} states no base kV (kv 0), so ohm values cannot be put in per unit: " +
-                "give the bus its kv, or give the line as rPu and xPu");
+                "give the bus its kv, or give the line's data per unit (\"per\": \"pu\")");
     }
 }
