@@ -64,6 +64,21 @@ public sealed class ColumnSpec<TRow>
         return this;
     }
 
+    /// <summary>
+    /// The same columns, a chosen few in a chosen order (a narrow screen puts duty before the currents):
+    /// each named by its machine key, or by its header when it has none. The columns themselves stay
+    /// declared once.
+    /// </summary>
+    /// <exception cref="ArgumentException">A name matches no column.</exception>
+    public ColumnSpec<TRow> Select(params string[] names)
+    {
+        var chosen = new ColumnSpec<TRow>();
+        foreach (string name in names)
+            chosen.Add(columns.FirstOrDefault(c => c.Key == name) ?? columns.FirstOrDefault(c => c.Key is null && c.Header == name)
+                ?? throw new ArgumentException($"no column '{name}' in this spec", nameof(names)));
+        return chosen;
+    }
+
     /// <summary>The readable cells of each row; a group-naming cell that repeats the row above is left empty.</summary>
     public List<string[]> ReadableRows(IEnumerable<TRow> rows)
     {

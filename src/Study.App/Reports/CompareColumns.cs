@@ -24,7 +24,7 @@ public static class CompareColumns
     /// <summary>Branches by their active power at the from end and their loading.</summary>
     public static ColumnSpec<BranchChange> Branches { get; } = new ColumnSpec<BranchChange>()
         .Text("id", "branch", b => b.Id)
-        .Text("kind", "kind", b => b.Kind)
+        .Text("kind", "kind", b => Labels.Kind(b.Kind))
         .CsvOnly("membership", b => Membership(b.Membership))
         .Number("beforeMw", "before", "MW", b => b.BeforeMw, 2)
         .Number("afterMw", "after", "MW", b => b.AfterMw, 2)

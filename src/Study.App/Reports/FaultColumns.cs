@@ -14,7 +14,7 @@ public static class FaultColumns
     {
         string current = perUnitOnly ? "pu" : "kA", impedance = perUnitOnly ? "pu" : "ohm";
         return new ColumnSpec<ShortCircuitLevel>()
-            .Text("bus", "bus", f => f.Bus)
+            .Text("bus", "bus", f => f.Bus, namesGroup: true)
             .Number("kv", "", "kV", f => LoadFlowColumns.Stated(f.Kv), 1)
             .Text("type", "type", f => f.Kind.Code())
             .Number(perUnitOnly ? "ikPu" : "ikKa", "I''k", current, f => f.Kv > 0 ? f.IkKa : f.IkPu, 3)
@@ -23,13 +23,18 @@ public static class FaultColumns
                 f => f.Kv > 0 ? f.EarthCurrentKa : f.EarthCurrentPu, 3,
                 reads: f => f.Kind.InvolvesEarth() ? Numbers.Fixed(f.Kv > 0 ? f.EarthCurrentKa : f.EarthCurrentPu, 3) : "")
             .Number("xOverR", "X/R", null, f => XOverR(f), 2)
-            .Number("kappa", "kappa", null, f => f.Kappa, 3)
-            .Number(perUnitOnly ? "ipPu" : "ipKa", "ip", current, f => f.Kv > 0 ? f.IpKa : f.IpPu, 2)
+            .Number("kappa", "κ", null, f => f.Kappa, 3)
+            .Number(perUnitOnly ? "ipPu" : "ipKa", "i_p", current, f => f.Kv > 0 ? f.IpKa : f.IpPu, 2)
             .Words(null, "Z1", _ => null, f => Impedance(Z1(f)), Align.Right, impedance)
             .Words(null, "Z0", _ => null, f => Impedance(Z0(f)), Align.Right, impedance)
             .CsvOnly($"z1R{Title(impedance)}", f => Z1(f)?.Real).CsvOnly($"z1X{Title(impedance)}", f => Z1(f)?.Imaginary)
             .CsvOnly($"z0R{Title(impedance)}", f => Z0(f)?.Real).CsvOnly($"z0X{Title(impedance)}", f => Z0(f)?.Imaginary);
     }
+
+    /// <summary>The Faults tab's selection of the same columns: the currents first, so they show on a narrow screen.</summary>
+    public static ColumnSpec<ShortCircuitLevel> ScreenLevels(bool perUnitOnly) => perUnitOnly
+        ? Levels(true).Select("bus", "type", "ikPu", "skMva", "xOverR", "kappa", "ipPu", "earthCurrentPu", "Z1", "Z0")
+        : Levels(false).Select("bus", "type", "ikKa", "skMva", "xOverR", "kappa", "ipKa", "earthCurrentKa", "kv", "Z1", "Z0");
 
     /// <summary>Phase-voltage magnitudes after one fault, in pu of each bus's base.</summary>
     public static ColumnSpec<PhaseVoltages> Voltages { get; } = new ColumnSpec<PhaseVoltages>()
@@ -51,39 +56,21 @@ public static class FaultColumns
             _ => "no fault current",
         });
 
+    /// <summary>Breaker duty: "▲ OVER" above a rating, "△ near" above 90 %, so the row reads without colour.</summary>
     public static ColumnSpec<BreakerDuty> Breakers { get; } = new ColumnSpec<BreakerDuty>()
         .Text("id", "breaker", b => b.Id)
         .Text("bus", "bus", b => b.Bus)
+        .Number("dutyPercent", "duty", "%", b => b.DutyPercent, 1, mark: b => b.DutyPercent is null ? "" : " " + Marks.Duty(b.Status))
+        .Words("status", "status", b => b.Status.Code(), b => Marks.DutyWords(b.Status))
         .Number("ikKa", "I''k", "kA", b => b.IkKa, 2)
         .Number("interruptingKa", "rated", "kA", b => b.InterruptingKa, 1)
-        .Number("ipKa", "ip", "kA", b => b.IpKa, 2)
+        .Number("ipKa", "i_p", "kA", b => b.IpKa, 2)
         .Number("peakKa", "peak", "kA", b => b.PeakKa, 1)
-        .Number("dutyPercent", "duty", "%", b => b.DutyPercent, 1)
-        .Words("status", "status", b => b.Status.Code(), b => b.Status.Code() + (b.Status == DutyStatus.Over ? Marks.Exceeded : ""))
         .Text("governingKind", "worst type", b => b.GoverningKind?.Code());
 
-    /// <summary>The Faults tab: one row per fault, the bus named on the first row of its group, so the groups read as one table per bus.</summary>
-    public static ColumnSpec<ShortCircuitLevel> ScreenLevels { get; } = new ColumnSpec<ShortCircuitLevel>()
-        .Text("bus", "Bus", f => f.Bus, namesGroup: true)
-        .Text("type", "Fault", f => f.Kind.Code())
-        .Number("ikKa", "I''k", "kA", f => f.IkKa, 2)
-        .Number("skMva", "S''k", "MVA", f => f.SkMva, 1)
-        .Number("xOverR", "X/R", null, f => XOverR(f), 2)
-        .Number("kappa", "κ", null, f => f.Kappa, 3)
-        .Number("ipKa", "i_p", "kA", f => f.IpKa, 2)
-        .Number("kv", "", "kV", f => LoadFlowColumns.Stated(f.Kv), 3, reads: f => Numbers.UpTo(LoadFlowColumns.Stated(f.Kv), 3))
-        .Number("ikPu", "I''k", "pu", f => f.IkPu, 3);
-
-    /// <summary>The Faults tab's breakers: duty and status first so that they show on a narrow screen; "▲ OVER", "△ near" in words.</summary>
-    public static ColumnSpec<BreakerDuty> ScreenBreakers { get; } = new ColumnSpec<BreakerDuty>()
-        .Text("id", "Breaker", b => b.Id)
-        .Number("dutyPercent", "Duty", "%", b => b.DutyPercent, 1, mark: b => b.DutyPercent is null ? "" : " " + Marks.Duty(b.Status))
-        .Words("status", "Status", b => b.Status.Code(), b => Marks.DutyWords(b.Status))
-        .Text("bus", "Bus", b => b.Bus)
-        .Number("ikKa", "I''k", "kA", b => b.IkKa, 2)
-        .Number("ipKa", "i_p", "kA", b => b.IpKa, 2)
-        .Number("interruptingKa", "Break", "kA", b => b.InterruptingKa, 2)
-        .Number("peakKa", "Peak", "kA", b => b.PeakKa, 2);
+    /// <summary>The Faults tab's selection: duty and status first so that they show on a narrow screen.</summary>
+    public static ColumnSpec<BreakerDuty> ScreenBreakers { get; } =
+        Breakers.Select("id", "dutyPercent", "status", "bus", "ikKa", "ipKa", "interruptingKa", "peakKa", "governingKind");
 
     /// <summary>X/R is unbounded when the fault impedance has no resistance (null in the result).</summary>
     private static double XOverR(ShortCircuitLevel f) => f.XOverR ?? double.PositiveInfinity;

@@ -14,58 +14,48 @@ public sealed record OutageViolationRow(ScenarioScreening Screening, OutageCase 
 public static class OutageColumns
 {
     /// <summary>
-    /// The report's table of one scenario (and outages.csv, every scenario): severity and a verdict
-    /// in words, what the outage islands and loses, the worst voltage and loading left.
+    /// Outages in every output: severity with its tier in words, what the outage islands and loses, the
+    /// worst voltage and loading left (▼/▲ when outside their limits), and what newly breaks.
     /// </summary>
     public static ColumnSpec<RankedOutage> Outages { get; } = new ColumnSpec<RankedOutage>()
-        .CsvOnly("scenario", o => o.Screening.Scenario)
+        .Text("scenario", "scenario", o => Labels.Scenario(o.Screening.Scenario), namesGroup: true)
         .Integer("rank", "rank", null, o => o.Rank)
-        .Number(null, "severity", null, o => o.Case.Severity, 1)
+        .Number("severity", "severity", null, o => o.Case.Severity, 1, mark: o => " " + OutageTiers.Words(OutageTiers.Of(o.Case)))
         .Text("element", "out", o => o.Case.Element)
-        .Text("kind", "kind", o => o.Case.Kind)
+        .Text("kind", "kind", o => Labels.Kind(o.Case.Kind))
         .Words("converged", "result", o => o.Case.Converged, o => Verdict(o.Case))
-        .Words("islandedBuses", "islanded buses", o => string.Join(' ', o.Case.IslandedBuses), o => string.Join(", ", o.Case.IslandedBuses))
-        .Number("lostLoadMw", "lost", "MW", o => o.Case.LostLoadMw, 2, reads: o => o.Case.LostLoadMw > 0 ? Numbers.Fixed(o.Case.LostLoadMw, 2) : "")
+        .Words("islandedBuses", "islanded buses", o => string.Join(' ', o.Case.IslandedBuses),
+            o => o.Case.Converged ? string.Join(", ", o.Case.IslandedBuses) : Numbers.Blank)
+        .Number("lostLoadMw", "lost", "MW", o => o.Case.Converged ? o.Case.LostLoadMw : null, 2,
+            reads: o => !o.Case.Converged ? Numbers.Blank : o.Case.LostLoadMw > 0 ? LostMw(o.Case) : "")
         .CsvOnly("lostGenerationMw", o => o.Case.LostGenerationMw)
-        .CsvOnly("newViolations", o => o.Case.NewViolations.Count)
-        .Number("worstVPu", "worst V", "pu", o => o.Case.WorstVPu, 4)
+        .Number("worstVPu", "worst V", "pu", o => o.Case.WorstVPu, 4, mark: o => o.Case.WorstVPu is null ? "" : VoltageMark(o.Screening, o.Case))
         .Text("worstVBus", "at", o => o.Case.WorstVBus)
-        .Number("worstLoadingPercent", "worst loading", "%", o => o.Case.WorstLoadingPercent, 1)
+        .Number("worstLoadingPercent", "worst loading", "%", o => o.Case.WorstLoadingPercent, 1,
+            mark: o => o.Case.WorstLoadingPercent is double pct ? (pct > 100 ? Marks.High : " ") : "")
         .Text("worstLoadingElement", "on", o => o.Case.WorstLoadingElement)
-        .Shown("parallel branch loading", o => string.Join(", ", o.Case.ParallelLoadings.Select(p => $"{p.Element} {Numbers.Fixed(p.LoadingPercent, 1)} %")))
+        .Integer("newViolations", "new", null, o => o.Case.Converged ? o.Case.NewViolations.Count : null)
         .Shown("new violations", o => string.Join("; ", o.Case.NewViolations.Select(Short)))
-        .CsvOnly("stressPercent", o => o.Case.StressPercent)
-        .CsvOnly("severity", o => o.Case.Severity);
+        .Shown("parallel branch loading", o => string.Join(", ", o.Case.ParallelLoadings.Select(p => $"{p.Element} {Numbers.Fixed(p.LoadingPercent, 1)} %")))
+        .CsvOnly("stressPercent", o => o.Case.StressPercent);
+
+    /// <summary>The report's table of one scenario: the same columns without the scenario.</summary>
+    public static ColumnSpec<RankedOutage> ScenarioOutages { get; } = Outages.Select("rank", "severity", "element", "kind", "converged",
+        "islandedBuses", "lostLoadMw", "worstVPu", "worstVBus", "worstLoadingPercent", "worstLoadingElement", "new violations", "parallel branch loading");
 
     public static ColumnSpec<OutageViolationRow> NewViolations { get; } = new ColumnSpec<OutageViolationRow>()
         .Text("scenario", "scenario", v => v.Screening.Scenario)
         .Text("outage", "outage", v => v.Case.Element)
         .Text("element", "element", v => v.Violation.Element)
-        .Text("kind", "kind", v => v.Violation.Kind)
+        .Text("kind", "kind", v => Labels.Kind(v.Violation.Kind))
         .Text("type", "type", v => SolveJson.ViolationName(v.Violation.Type))
         .Number("value", "value", null, v => v.Violation.Value, 4, reads: v => Value(v.Violation.Type, v.Violation.Value))
         .Number("limit", "limit", null, v => v.Violation.Limit, 3)
         .Number("intactValue", "intact", null, v => v.Violation.IntactValue, 4, reads: v => Value(v.Violation.Type, v.Violation.IntactValue));
 
-    /// <summary>
-    /// The Outages tab: the scenario named once per group, the tier spelt out beside the severity,
-    /// ▼/▲ on the worst voltage and loading, so that the ranking reads without colour.
-    /// </summary>
-    public static ColumnSpec<RankedOutage> ScreenOutages { get; } = new ColumnSpec<RankedOutage>()
-        .Text("scenario", "Scenario", o => Labels.Scenario(o.Screening.Scenario), namesGroup: true)
-        .Integer("rank", "Rank", null, o => o.Rank)
-        .Text("element", "Outage", o => o.Case.Element)
-        .Text("kind", "Kind", o => o.Case.Kind)
-        .Number("severity", "Severity", null, o => o.Case.Severity, 1, mark: o => " " + OutageTiers.Words(OutageTiers.Of(o.Case)))
-        .Words("converged", "Conv.", o => o.Case.Converged, o => o.Case.Converged ? "yes" : "NO")
-        .Words("islandedBuses", "Islanded", o => Solved(o, o.Case.IslandedBuses.Count),
-            o => !o.Case.Converged ? Numbers.Blank : o.Case.IslandedBuses.Count == 0 ? "0" : $"{o.Case.IslandedBuses.Count} bus(es)", Align.Right)
-        .Number("lostLoadMw", "Lost", "MW", o => Solved(o, o.Case.LostLoadMw), 1,
-            reads: o => !o.Case.Converged ? Numbers.Blank : o.Case.IslandedBuses.Count == 0 ? "0" : LostMw(o.Case))
-        .Number("worstVPu", "Worst V", "pu", o => o.Case.WorstVPu, 4, mark: o => o.Case.WorstVPu is null ? "" : $"{VoltageMark(o.Screening, o.Case)} {o.Case.WorstVBus}")
-        .Number("worstLoadingPercent", "Worst loading", "%", o => o.Case.WorstLoadingPercent, 1,
-            mark: o => o.Case.WorstLoadingPercent is double pct ? $"{(pct > 100 ? Marks.High : " ")} {o.Case.WorstLoadingElement}" : "")
-        .Integer("newViolations", "New viol.", null, o => o.Case.Converged ? o.Case.NewViolations.Count : null);
+    /// <summary>The Outages tab: the scenario named once per group; the counts of what breaks, the list in the detail.</summary>
+    public static ColumnSpec<RankedOutage> ScreenOutages { get; } = Outages.Select("scenario", "rank", "element", "kind", "severity",
+        "lostLoadMw", "worstVPu", "worstVBus", "worstLoadingPercent", "worstLoadingElement", "newViolations", "islandedBuses");
 
     /// <summary>Every outage of every scenario, most severe first within each scenario.</summary>
     public static IEnumerable<RankedOutage> Ranked(OutageScreeningResult r) => r.Scenarios.SelectMany(Ranked);
@@ -101,9 +91,9 @@ public static class OutageColumns
     public static string VoltageMark(ScenarioScreening s, OutageCase c)
     {
         if (c.WorstVPu is not double v || c.WorstVBus is not { } bus) return " ";
-        OutageViolation? added = c.NewViolations.FirstOrDefault(x => x.Element == bus && x.Kind == "bus");
+        OutageViolation? added = c.NewViolations.FirstOrDefault(x => x.Element == bus && x.Kind == Study.Core.Model.ElementKind.Bus);
         if (added is not null) return Marks.Padded(added.Type);
-        foreach (Violation x in s.IntactViolations.Where(x => x.Element == bus && x.Kind == "bus"))
+        foreach (Violation x in s.IntactViolations.Where(x => x.Element == bus && x.Kind == Study.Core.Model.ElementKind.Bus))
         {
             if (x.Type == ViolationKind.Low && v < x.Limit) return Marks.Low;
             if (x.Type == ViolationKind.High && v > x.Limit) return Marks.High;
@@ -114,5 +104,4 @@ public static class OutageColumns
     /// <summary>A loading in percent with one decimal, a voltage in pu with four.</summary>
     private static string Value(ViolationKind type, double? value) => Numbers.Fixed(value, type == ViolationKind.Overload ? 1 : 4);
 
-    private static double? Solved(RankedOutage o, double value) => o.Case.Converged ? value : null;
 }

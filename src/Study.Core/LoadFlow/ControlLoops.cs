@@ -34,7 +34,7 @@ internal sealed class ControlLoops
         positions = model.Taps.Select(t => t.Position).ToArray();
         lastMove = new int[positions.Length];
         reversals = new int[positions.Length];
-        AtLimit = new string?[positions.Length];
+        AtLimit = new TapLimit?[positions.Length];
         // Parallel banks regulating one bus form one group and move together, so they cannot hunt
         // against each other.
         groups = model.Taps.Select((t, k) => (t, k)).Where(x => x.t.RegulatedBus is not null)
@@ -44,15 +44,15 @@ internal sealed class ControlLoops
     /// <summary>The model with the current tap positions.</summary>
     public PerUnitModel Model { get; private set; }
 
-    /// <summary>Per tap: "min"/"max" when it wants to move past its range, else null.</summary>
-    public string?[] AtLimit { get; }
+    /// <summary>Per tap: the end of its range it sits at while it wants to move past it, else null.</summary>
+    public TapLimit?[] AtLimit { get; }
 
     public bool IsRegulating(int tap) => options.RegulateTaps && Model.Taps[tap].RegulatedBus is not null;
 
     /// <summary>Buses originally PV that now sit at a reactive limit ("min" or "max").</summary>
-    public string? ReactiveLimit(int bus) =>
+    public ReactiveLimitSide? ReactiveLimit(int bus) =>
         !voltageControlled[bus] || schedule.Type[bus] == BusType.Pv ? null
-        : Math.Abs(schedule.QGen[bus] - fixedQ[bus] - schedule.QMax[bus]) < 1e-12 ? "max" : "min";
+        : Math.Abs(schedule.QGen[bus] - fixedQ[bus] - schedule.QMax[bus]) < 1e-12 ? ReactiveLimitSide.Max : ReactiveLimitSide.Min;
 
     /// <summary>PV → PQ at a limit; PQ at a limit → PV when the voltage moves back to the set point's side.</summary>
     public bool AdjustReactiveLimits()
@@ -72,9 +72,9 @@ internal sealed class ControlLoops
             }
             else
             {
-                string? limit = ReactiveLimit(i);
+                ReactiveLimitSide? limit = ReactiveLimit(i);
                 double v = nr.Magnitude[i], set = schedule.VSet[i];
-                if ((limit == "max" && v > set + 1e-6) || (limit == "min" && v < set - 1e-6))
+                if ((limit == ReactiveLimitSide.Max && v > set + 1e-6) || (limit == ReactiveLimitSide.Min && v < set - 1e-6))
                 {
                     schedule.Type[i] = BusType.Pv;
                     nr.SetState(i, set, nr.Angle[i]);
@@ -121,7 +121,7 @@ internal sealed class ControlLoops
                 int target = Math.Clamp(positions[k] + delta, tap.Min, tap.Max);
                 if (target == positions[k])
                 {
-                    if (delta != 0) AtLimit[k] = delta > 0 ? "max" : "min";
+                    if (delta != 0) AtLimit[k] = delta > 0 ? TapLimit.Highest : TapLimit.Lowest;
                     continue;
                 }
                 int move = target - positions[k];

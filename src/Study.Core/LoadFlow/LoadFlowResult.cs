@@ -1,5 +1,25 @@
 // The result records of a load flow, read alike by the CLI, the TUI and the tests.
+using Study.Core.Model;
+using Study.Core.Units;
+
 namespace Study.Core.LoadFlow;
+
+/// <summary>The end of a tap changer's range.</summary>
+public enum TapLimit
+{
+    Lowest,
+    Highest,
+}
+
+/// <summary>Which reactive limit holds a voltage-controlling bus.</summary>
+public enum ReactiveLimitSide
+{
+    Min,
+    Max,
+}
+
+/// <summary>A voltage-controlling bus held at one of its reactive limits (it no longer holds its voltage).</summary>
+public sealed record ReactiveLimitState(string Bus, ReactiveLimitSide Side);
 
 /// <summary>Which limit a bus voltage or branch loading breaks.</summary>
 public enum ViolationKind
@@ -35,8 +55,7 @@ public sealed record BusResult
 public sealed record BranchResult
 {
     public required string Id { get; init; }
-    /// <summary>"line", "transformer" or "three-winding".</summary>
-    public required string Kind { get; init; }
+    public required BranchKind Kind { get; init; }
     public required string From { get; init; }
     public required string To { get; init; }
     public double PFromMw { get; init; }
@@ -62,8 +81,8 @@ public sealed record TapResult
     public int Position { get; init; }
     public double Ratio { get; init; }
     public bool Regulating { get; init; }
-    /// <summary>"min" or "max" when the tap wants to move further but cannot; null otherwise.</summary>
-    public string? AtLimit { get; init; }
+    /// <summary>The end of its range the tap sits at while it wants to move further; null otherwise.</summary>
+    public TapLimit? AtLimit { get; init; }
     public string? RegulatedBus { get; init; }
 }
 
@@ -86,8 +105,8 @@ public sealed record LoadFlowTotals
 public sealed record Violation
 {
     public required string Element { get; init; }
-    /// <summary>"bus" or the branch kind.</summary>
-    public required string Kind { get; init; }
+    /// <summary>A bus, or the kind of branch (line, transformer, three-winding transformer).</summary>
+    public required ElementKind Kind { get; init; }
     public ViolationKind Type { get; init; }
     /// <summary>Voltage in pu, or loading in percent.</summary>
     public double Value { get; init; }
@@ -113,8 +132,8 @@ public sealed record LoadFlowResult
     public LoadFlowTotals Totals { get; init; } = new();
     public IReadOnlyList<Violation> Violations { get; init; } = [];
     public IReadOnlyList<IterationRecord> Log { get; init; } = [];
-    /// <summary>Voltage-controlling buses held at a reactive limit, as "bus:max" or "bus:min".</summary>
-    public IReadOnlyList<string> BusesAtReactiveLimit { get; init; } = [];
+    /// <summary>Voltage-controlling buses held at a reactive limit, and which one.</summary>
+    public IReadOnlyList<ReactiveLimitState> BusesAtReactiveLimit { get; init; } = [];
 
     /// <summary>The Jacobian at the final state, when asked for (rows/columns: ΔP then ΔQ of the unknown buses).</summary>
     public Numerics.CscMatrix<double>? Jacobian { get; init; }

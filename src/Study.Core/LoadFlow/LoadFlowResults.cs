@@ -1,6 +1,7 @@
 // Turns the solved state into result records: bus voltages, branch flows at both ends, totals, violations.
 using System.Numerics;
 using Study.Core.Admittance;
+using Study.Core.Model;
 using Study.Core.Units;
 
 namespace Study.Core.LoadFlow;
@@ -29,7 +30,7 @@ internal static class LoadFlowResults
             if (violation != ViolationKind.None)
                 violations.Add(new Violation
                 {
-                    Element = bus.Id, Kind = "bus", Type = violation, Value = vm,
+                    Element = bus.Id, Kind = ElementKind.Bus, Type = violation, Value = vm,
                     Limit = violation == ViolationKind.Low ? bus.VMin : bus.VMax,
                 });
             if (bus.IsInternal && !options.IncludeInternalBuses) continue;
@@ -59,7 +60,7 @@ internal static class LoadFlowResults
             if (r.LoadingPercent > 100)
                 violations.Add(new Violation
                 {
-                    Element = r.Id, Kind = r.Kind, Type = ViolationKind.Overload, Value = r.LoadingPercent.Value, Limit = 100,
+                    Element = r.Id, Kind = KindOf(r.Kind), Type = ViolationKind.Overload, Value = r.LoadingPercent.Value, Limit = 100,
                 });
         }
 
@@ -74,9 +75,9 @@ internal static class LoadFlowResults
                 RegulatedBus = t.RegulatedBus is int rb ? model.Buses[rb].Id : null,
             });
         }
-        var limits = new List<string>();
+        var limits = new List<ReactiveLimitState>();
         for (int i = 0; i < n; i++)
-            if (controls.ReactiveLimit(i) is string l) limits.Add($"{model.Buses[i].Id}:{l}");
+            if (controls.ReactiveLimit(i) is ReactiveLimitSide side) limits.Add(new ReactiveLimitState(model.Buses[i].Id, side));
 
         return new LoadFlowResult
         {
@@ -110,12 +111,7 @@ internal static class LoadFlowResults
         return new BranchResult
         {
             Id = b.Winding is null ? b.Id : $"{b.Id}/{b.Winding}",
-            Kind = b.Kind switch
-            {
-                BranchKind.Line => "line",
-                BranchKind.Transformer => "transformer",
-                _ => "three-winding",
-            },
+            Kind = b.Kind,
             From = from.Id, To = to.Id,
             PFromMw = sFrom.Real, QFromMvar = sFrom.Imaginary, PToMw = sTo.Real, QToMvar = sTo.Imaginary,
             SFromMva = sFrom.Magnitude, SToMva = sTo.Magnitude,
@@ -125,4 +121,12 @@ internal static class LoadFlowResults
             LoadingPercent = b.RatingMva is > 0 ? sMax / b.RatingMva.Value * 100 : null,
         };
     }
+
+    /// <summary>The element kind a branch's violation names.</summary>
+    internal static ElementKind KindOf(BranchKind kind) => kind switch
+    {
+        BranchKind.Line => ElementKind.Line,
+        BranchKind.Transformer => ElementKind.Transformer,
+        _ => ElementKind.ThreeWindingTransformer,
+    };
 }

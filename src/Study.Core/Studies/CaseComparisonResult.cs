@@ -1,5 +1,6 @@
 // Result records of a comparison of two solved cases: per-bus voltage, per-branch flow, losses and violations.
 using Study.Core.LoadFlow;
+using Study.Core.Units;
 
 namespace Study.Core.Studies;
 
@@ -29,7 +30,7 @@ public sealed record BusChange
 public sealed record BranchChange
 {
     public required string Id { get; init; }
-    public required string Kind { get; init; }
+    public required BranchKind Kind { get; init; }
     public CaseMembership Membership { get; init; }
     public double? BeforeMw { get; init; }
     public double? AfterMw { get; init; }

@@ -1,18 +1,19 @@
 // Which elements an outage screening takes out, and the network with one of them out of service.
 using Study.Core.Model;
+using Study.Core.Units;
 
 namespace Study.Core.Studies;
 
 /// <summary>A line or transformer that can be taken out: its id, its branch kind and the buses it joins.</summary>
-public sealed record OutageElement(string Id, string Kind, IReadOnlyList<string> Terminals);
+public sealed record OutageElement(string Id, BranchKind Kind, IReadOnlyList<string> Terminals);
 
 public static class OutageElements
 {
     /// <summary>Every in-service line, transformer and three-winding transformer, in file order.</summary>
     public static IReadOnlyList<OutageElement> InService(Network network) =>
-        network.Lines.Where(l => l.InService).Select(l => new OutageElement(l.Id, "line", [l.From, l.To]))
-            .Concat(network.Transformers.Where(t => t.InService).Select(t => new OutageElement(t.Id, "transformer", [t.Hv, t.Lv])))
-            .Concat(network.ThreeWindingTransformers.Where(t => t.InService).Select(t => new OutageElement(t.Id, "three-winding", [t.Hv, t.Mv, t.Lv])))
+        network.Lines.Where(l => l.InService).Select(l => new OutageElement(l.Id, BranchKind.Line, [l.From, l.To]))
+            .Concat(network.Transformers.Where(t => t.InService).Select(t => new OutageElement(t.Id, BranchKind.Transformer, [t.Hv, t.Lv])))
+            .Concat(network.ThreeWindingTransformers.Where(t => t.InService).Select(t => new OutageElement(t.Id, BranchKind.ThreeWindingTransformer, [t.Hv, t.Mv, t.Lv])))
             .ToList();
 
     /// <summary>The named elements, checked: each must be an in-service line or transformer, named once.</summary>
@@ -38,19 +39,4 @@ public static class OutageElements
         }
         return picked;
     }
-
-    /// <summary>The network with one element out of service; every other element as it was.</summary>
-    public static Network Without(Network network, OutageElement element) => element.Kind switch
-    {
-        "line" => network with { Lines = network.Lines.Select(l => l.Id == element.Id ? l with { InService = false } : l).ToList() },
-        "transformer" => network with
-        {
-            Transformers = network.Transformers.Select(t => t.Id == element.Id ? t with { InService = false } : t).ToList(),
-        },
-        _ => network with
-        {
-            ThreeWindingTransformers = network.ThreeWindingTransformers
-                .Select(t => t.Id == element.Id ? t with { InService = false } : t).ToList(),
-        },
-    };
 }

@@ -7,8 +7,8 @@ namespace Study.Core.Studies;
 public sealed record OutageViolation
 {
     public required string Element { get; init; }
-    /// <summary>"bus" or the branch kind, as in <see cref="Violation.Kind"/>.</summary>
-    public required string Kind { get; init; }
+    /// <summary>A bus, or the kind of branch, as in <see cref="Violation.Kind"/>.</summary>
+    public required Model.ElementKind Kind { get; init; }
     public ViolationKind Type { get; init; }
     /// <summary>Voltage in pu, or loading in percent, with the element out.</summary>
     public double Value { get; init; }
@@ -24,8 +24,7 @@ public sealed record ParallelLoading(string Element, double? LoadingPercent);
 public sealed record OutageCase
 {
     public required string Element { get; init; }
-    /// <summary>"line", "transformer" or "three-winding".</summary>
-    public required string Kind { get; init; }
+    public required Units.BranchKind Kind { get; init; }
     public string? Scenario { get; init; }
     public bool Converged { get; init; }
     /// <summary>Why the load flow failed, when it did.</summary>

@@ -23,7 +23,7 @@ public class ReportCommandsTests
         Assert.Contains("- **options:** Newton-Raphson, tolerance 1.0e-8 pu", text);
         Assert.Contains("## Violations (0)", text);
         var tables = ReportChecks.MarkdownTables(text);
-        Assert.Equal([(11, 9), (12, 10), (5, 4)], tables);
+        Assert.Equal([(11, 9), (13, 10), (5, 4)], tables);
     }
 
     [Fact]

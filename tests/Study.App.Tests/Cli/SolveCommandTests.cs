@@ -18,8 +18,13 @@ public class SolveCommandTests
         foreach (string key in new[] { "id", "kv", "vPu", "vKv", "angleDeg", "pGenMw", "qGenMvar", "pLoadMw", "qLoadMvar", "violation" })
             Assert.True(bus.TryGetProperty(key, out _), key);
         JsonElement branch = root.GetProperty("branches")[0];
-        foreach (string key in new[] { "id", "kind", "from", "to", "pFromMw", "qFromMvar", "pToMw", "qToMvar", "iFromA", "lossMw", "lossMvar", "loadingPercent" })
+        foreach (string key in new[] { "id", "kind", "from", "to", "loss", "pctOfRating" })
             Assert.True(branch.TryGetProperty(key, out _), key);
+        foreach (string end in new[] { "from", "to" })
+            foreach (string key in new[] { "bus", "mw", "mvar", "amps" })
+                Assert.True(branch.GetProperty(end).TryGetProperty(key, out _), $"{end}.{key}");
+        Assert.True(branch.GetProperty("loss").TryGetProperty("mw", out _));
+        Assert.True(branch.GetProperty("loss").TryGetProperty("mvar", out _));
         // Published solution of the IEEE 14 bus case (DEVELOPERS.md, Outside references): bus 1 at 1.060 pu, bus 14 at 1.036 pu.
         Assert.Equal(1.060, root.GetProperty("buses")[0].GetProperty("vPu").GetDouble(), 3);
         Assert.InRange(root.GetProperty("buses")[13].GetProperty("vPu").GetDouble(), 1.034, 1.038);

@@ -33,19 +33,17 @@ public sealed class ColumnSpecTests
             new BusResult { Id = "NOKV", VPu = 0.93, Violation = ViolationKind.Low, VMin = 0.95, VMax = 1.05 },
             new BusResult { Id = "DEAD", Kv = 11, VPu = 0, VKv = 0, Energised = false },
         ];
-        BranchResult[] branches = [.. r.Branches, new BranchResult { Id = "L9", Kind = "line", From = "A", To = "B", LoadingPercent = 120.25 }];
-        TapResult[] taps = [.. r.Taps, new TapResult { Id = "T9", Position = 5, Ratio = 1.125, Regulating = true, RegulatedBus = "B", AtLimit = "max" }];
+        BranchResult[] branches = [.. r.Branches, new BranchResult { Id = "L9", Kind = BranchKind.Line, From = "A", To = "B", LoadingPercent = 120.25 }];
+        TapResult[] taps = [.. r.Taps, new TapResult { Id = "T9", Position = 5, Ratio = 1.125, Regulating = true, RegulatedBus = "B", AtLimit = TapLimit.Highest }];
         Violation[] violations =
         [
-            new Violation { Element = "QE33", Kind = "bus", Type = ViolationKind.Low, Value = 0.94123, Limit = 0.95 },
-            new Violation { Element = "GT2", Kind = "transformer", Type = ViolationKind.Overload, Value = 120.34, Limit = 100 },
+            new Violation { Element = "QE33", Kind = ElementKind.Bus, Type = ViolationKind.Low, Value = 0.94123, Limit = 0.95 },
+            new Violation { Element = "GT2", Kind = ElementKind.Transformer, Type = ViolationKind.Overload, Value = 120.34, Limit = 100 },
         ];
         AssertSameCells(LoadFlowColumns.Buses(id => names.GetValueOrDefault(id)), buses);
         AssertSameCells(LoadFlowColumns.Branches, branches);
         AssertSameCells(LoadFlowColumns.Taps, taps);
         AssertSameCells(LoadFlowColumns.Violations, violations);
-        AssertSameCells(LoadFlowColumns.ScreenBuses, buses);
-        AssertSameCells(LoadFlowColumns.ScreenBranches, branches);
     }
 
     [Fact]
@@ -66,7 +64,7 @@ public sealed class ColumnSpecTests
         var failed = new ScenarioScreening
         {
             Scenario = "stress", IntactConverged = true,
-            Outages = [new OutageCase { Element = "L9", Kind = "line", Converged = false, Severity = OutageSeverity.NoConvergence }],
+            Outages = [new OutageCase { Element = "L9", Kind = BranchKind.Line, Converged = false, Severity = OutageSeverity.NoConvergence }],
         };
         r = r with { Scenarios = [.. r.Scenarios, failed] };
         Assert.NotEmpty(OutageColumns.Violations(r));
@@ -82,7 +80,7 @@ public sealed class ColumnSpecTests
         Scenario? peak = Demo.FindScenario("winter-peak");
         CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(before), "winter-peak", StudyCase.Of(Demo), peak?.Name, LoadFlowOptions.Default);
         Assert.Contains(r.Buses, b => b.DeltaPu is null);
-        var violation = new Violation { Element = "GT2", Kind = "transformer", Type = ViolationKind.Overload, Value = 101.5, Limit = 100 };
+        var violation = new Violation { Element = "GT2", Kind = ElementKind.Transformer, Type = ViolationKind.Overload, Value = 101.5, Limit = 100 };
         r = r with { ViolationsAppeared = [violation] };
         AssertSameCells(CompareColumns.Buses, r.Buses);
         AssertSameCells(CompareColumns.Branches, r.Branches);
@@ -104,7 +102,7 @@ public sealed class ColumnSpecTests
         AssertSameCells(FaultColumns.Contributions(kv: true), r.Faults[0].Contributions);
         AssertSameCells(FaultColumns.Contributions(kv: false), r.Faults[0].Contributions);
         AssertSameCells(FaultColumns.Breakers, breakers);
-        AssertSameCells(FaultColumns.ScreenLevels, levels);
+        AssertSameCells(FaultColumns.ScreenLevels(false), levels);
         AssertSameCells(FaultColumns.ScreenBreakers, breakers);
         Assert.Contains(PlainText(FaultColumns.Levels(false), levels), row => row.Contains(Numbers.Infinity));
     }
@@ -124,9 +122,9 @@ public sealed class ColumnSpecTests
     public void A_group_is_named_once_on_screen_and_on_every_row_in_CSV()
     {
         FaultResult r = FaultStudy.Run(PerUnitModel.Build(Demo), new FaultRequest { Buses = ["CQ11"], Kinds = [FaultKind.ThreePhase, FaultKind.LineToEarth] });
-        List<string[]> screen = Screen(FaultColumns.ScreenLevels, r.Faults);
+        List<string[]> screen = Screen(FaultColumns.ScreenLevels(false), r.Faults);
         Assert.Equal(["CQ11", ""], screen.Skip(1).Select(row => row[0]));
-        List<string[]> csv = Csv(CsvTable.Of(FaultColumns.ScreenLevels, r.Faults).ToString());
+        List<string[]> csv = Csv(CsvTable.Of(FaultColumns.ScreenLevels(false), r.Faults).ToString());
         Assert.Equal(["CQ11", "CQ11"], csv.Skip(1).Select(row => row[0]));
     }
 }

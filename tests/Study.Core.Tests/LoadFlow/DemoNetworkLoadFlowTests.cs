@@ -19,7 +19,7 @@ public class DemoNetworkLoadFlowTests
         // Power balance closes: generation = load + branch losses + shunt losses.
         var t = r.Totals;
         Assert.Equal(t.GenerationMw, t.LoadMw + t.LossMw + t.ShuntMw, 6);
-        Assert.DoesNotContain(r.Violations, v => v.Kind == "bus" && v.Element.EndsWith("33", StringComparison.Ordinal));
+        Assert.DoesNotContain(r.Violations, v => v.Kind == ElementKind.Bus && v.Element.EndsWith("33", StringComparison.Ordinal));
         foreach (BusResult b in r.Buses) Assert.True(double.IsFinite(b.VPu) && b.VPu > 0.8, b.Id);
     }
 }

@@ -56,7 +56,7 @@ public class TapRegulationTests
         Assert.True(r.Converged);
         TapResult t = r.Taps.Single();
         Assert.Equal(-2, t.Position);
-        Assert.Equal("min", t.AtLimit);
+        Assert.Equal(TapLimit.Lowest, t.AtLimit);
     }
 
     [Fact]

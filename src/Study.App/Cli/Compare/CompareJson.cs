@@ -3,6 +3,7 @@ using Study.App.Cli.Solve;
 using Study.Core.LoadFlow;
 using Study.Core.Studies;
 
+using Study.App.Reports;
 namespace Study.App.Cli.Compare;
 
 public sealed record CompareBusJson(string Id, double? BeforePu, double? AfterPu, double? DeltaPu);
@@ -27,5 +28,5 @@ public sealed record CompareJson(IReadOnlyList<CompareBusJson> Buses, IReadOnlyL
         Before = before, After = after,
     };
 
-    private static CompareViolationJson Of(Violation v) => new(v.Element, v.Kind, SolveJson.ViolationName(v.Type), v.Value, v.Limit);
+    private static CompareViolationJson Of(Violation v) => new(v.Element, Labels.Kind(v.Kind), SolveJson.ViolationName(v.Type), v.Value, v.Limit);
 }

@@ -38,7 +38,7 @@ public static class OutageReport
         if (s.IntactViolations.Count > 0)
             doc.List(s.IntactViolations.Select(v => "intact: " + LoadFlowReport.Describe(v)));
         doc.Text(Finding(s));
-        doc.Table(OutageColumns.Outages, OutageColumns.Ranked(s), spaceBefore: true);
+        doc.Table(OutageColumns.ScenarioOutages, OutageColumns.Ranked(s), spaceBefore: true);
     }
 
     private static string Finding(ScenarioScreening s)

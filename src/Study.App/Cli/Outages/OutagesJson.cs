@@ -3,6 +3,7 @@ using System.Text.Json.Serialization;
 using Study.App.Cli.Solve;
 using Study.Core.Studies;
 
+using Study.App.Reports;
 namespace Study.App.Cli.Outages;
 
 /// <summary>A new violation: the element, its kind ("bus" or the branch kind), the limit broken ("low", "high", "overload").</summary>
@@ -31,8 +32,8 @@ public sealed record OutagesJson(string? Scenario, IReadOnlyList<OutageJson> Out
     public string? IntactMessage { get; init; }
 
     public static OutagesJson From(ScenarioScreening s) => new(s.Scenario, s.Outages.Select(o =>
-        new OutageJson(o.Element, o.Kind, o.Converged, o.IslandedBuses, o.LostLoadMw,
-            o.NewViolations.Select(v => new OutageViolationJson(v.Element, v.Kind, SolveJson.ViolationName(v.Type), v.Value, v.Limit, v.IntactValue)).ToList(),
+        new OutageJson(o.Element, Labels.Kind(o.Kind), o.Converged, o.IslandedBuses, o.LostLoadMw,
+            o.NewViolations.Select(v => new OutageViolationJson(v.Element, Labels.Kind(v.Kind), SolveJson.ViolationName(v.Type), v.Value, v.Limit, v.IntactValue)).ToList(),
             o.WorstVPu, o.WorstLoadingPercent, o.Severity)
         {
             WorstVBus = o.WorstVBus, WorstLoadingElement = o.WorstLoadingElement, Message = o.Message,

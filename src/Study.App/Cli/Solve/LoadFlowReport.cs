@@ -28,7 +28,7 @@ public static class LoadFlowReport
             summary.Add($"against the published solution ({published.Source}): largest |dV| {Fixed(published.MaxVoltageDifferencePu, 4)} pu at bus {published.MaxVoltageBus}, "
                       + $"largest |d angle| {Fixed(published.MaxAngleDifferenceDeg, 2)} deg at bus {published.MaxAngleBus}");
         if (r.BusesAtReactiveLimit.Count > 0)
-            summary.Add($"at a reactive limit: {string.Join(", ", r.BusesAtReactiveLimit)}");
+            summary.Add($"at a reactive limit: {string.Join(", ", r.BusesAtReactiveLimit.Select(Labels.Limit))}");
         if (network.IsPerUnitOnly) summary.Add("kV not stated in this case: voltages and currents in per unit only");
         doc.Text(summary.ToArray());
 

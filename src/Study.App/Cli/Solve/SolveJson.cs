@@ -1,4 +1,5 @@
 // The --json shape of `study solve` (README, "Results as JSON").
+using Study.App.Reports;
 using Study.Core.LoadFlow;
 
 namespace Study.App.Cli.Solve;
@@ -6,9 +7,14 @@ namespace Study.App.Cli.Solve;
 public sealed record SolveBusJson(string Id, double? Kv, double VPu, double? VKv, double AngleDeg,
     double PGenMw, double QGenMvar, double PLoadMw, double QLoadMvar, string? Violation);
 
-public sealed record SolveBranchJson(string Id, string Kind, string From, string To, double PFromMw, double QFromMvar,
-    double PToMw, double QToMvar, double? IFromA, double LossMw, double LossMvar, double? LoadingPercent);
+/// <summary>One end of a branch: its bus, the power into the branch there and the current, A (null without kV).</summary>
+public sealed record BranchEndJson(string Bus, double Mw, double Mvar, double? Amps);
 
+public sealed record BranchLossJson(double Mw, double Mvar);
+
+public sealed record SolveBranchJson(string Id, string Kind, BranchEndJson From, BranchEndJson To, BranchLossJson Loss, double? PctOfRating);
+
+/// <summary>A tap's final position; atLimit "lowest" or "highest" when it sits at that end of its range wanting to move further.</summary>
 public sealed record SolveTapJson(string Id, int Position, string? AtLimit);
 
 public sealed record SolveTotalsJson(double GenerationMw, double GenerationMvar, double LoadMw, double LoadMvar,
@@ -51,9 +57,10 @@ public sealed record SolveJson(bool Converged, int Iterations, double MaxMismatc
             r.Converged, r.Iterations, r.MaxMismatchPu,
             r.Buses.Select(b => new SolveBusJson(b.Id, b.Kv > 0 ? b.Kv : null, b.VPu, b.VKv, b.AngleDeg,
                 b.PGenMw, b.QGenMvar, b.PLoadMw, b.QLoadMvar, ViolationName(b.Violation))).ToList(),
-            r.Branches.Select(b => new SolveBranchJson(b.Id, b.Kind, b.From, b.To, b.PFromMw, b.QFromMvar,
-                b.PToMw, b.QToMvar, b.IFromA, b.LossMw, b.LossMvar, b.LoadingPercent)).ToList(),
-            r.Taps.Select(x => new SolveTapJson(x.Id, x.Position, x.AtLimit)).ToList(),
+            r.Branches.Select(b => new SolveBranchJson(b.Id, Labels.Kind(b.Kind),
+                new BranchEndJson(b.From, b.PFromMw, b.QFromMvar, b.IFromA), new BranchEndJson(b.To, b.PToMw, b.QToMvar, b.IToA),
+                new BranchLossJson(b.LossMw, b.LossMvar), b.LoadingPercent)).ToList(),
+            r.Taps.Select(x => new SolveTapJson(x.Id, x.Position, Labels.Limit(x.AtLimit))).ToList(),
             r.Converged ? new SolveTotalsJson(t.GenerationMw, t.GenerationMvar, t.LoadMw, t.LoadMvar, t.LossMw, t.LossMvar) : null)
         {
             Message = r.Converged ? null : r.Message,

@@ -7,7 +7,7 @@ namespace Study.App.Tui.Faults;
 /// <summary>Duty reads without colour: "▲ OVER", "△ near".</summary>
 public static class FaultTables
 {
-    public static string[] LevelHeaders => FaultColumns.ScreenLevels.Headings;
+    public static string[] LevelHeaders => FaultColumns.ScreenLevels(false).Headings;
 
     public static string[] BreakerHeaders => FaultColumns.ScreenBreakers.Headings;
 
@@ -24,7 +24,7 @@ public static class FaultTables
     }
 
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>
-    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenLevels, r.Faults);
+    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenLevels(r.PerUnitOnly), r.Faults);
 
     public static TextTableSource Breakers(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenBreakers, r.Breakers);
 }

@@ -7,11 +7,15 @@ namespace Study.App.Tui.LoadFlow;
 /// <summary>The bus table marks low and high voltages ▼/▲; the branch table marks loading above the rating ▲.</summary>
 public static class ResultTables
 {
-    public static string[] BusHeaders => LoadFlowColumns.ScreenBuses.Headings;
+    /// <summary>The bus columns without the names, which the table's neighbours already show.</summary>
+    private static readonly ColumnSpec<BusResult> ScreenBuses = LoadFlowColumns.Buses()
+        .Select("id", "kv", "vPu", "vKv", "angleDeg", "band pu", "pGenMw", "qGenMvar", "pLoadMw", "qLoadMvar");
 
-    public static string[] BranchHeaders => LoadFlowColumns.ScreenBranches.Headings;
+    public static string[] BusHeaders => ScreenBuses.Headings;
 
-    public static TextTableSource Buses(LoadFlowResult r) => TextTableSource.Of(LoadFlowColumns.ScreenBuses, r.Buses);
+    public static string[] BranchHeaders => LoadFlowColumns.Branches.Headings;
 
-    public static TextTableSource Branches(LoadFlowResult r) => TextTableSource.Of(LoadFlowColumns.ScreenBranches, r.Branches);
+    public static TextTableSource Buses(LoadFlowResult r) => TextTableSource.Of(ScreenBuses, r.Buses);
+
+    public static TextTableSource Branches(LoadFlowResult r) => TextTableSource.Of(LoadFlowColumns.Branches, r.Branches);
 }
