@@ -43,6 +43,21 @@ public sealed class FormAndResultTests
     }
 
     [Fact]
+    public void The_form_names_fields_by_their_labels_not_by_file_keys()
+    {
+        var form = new ElementForm(SampleNetwork.Build(), ElementKind.Transformer, "T1");
+        form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Step size")] = "1.25";
+        form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Lowest position")] = "-8";
+        form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Highest position")] = "8";
+        form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Present position")] = "12";
+        form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Impedance")] = "-10";
+        FormState state = form.Evaluate();
+        Assert.Contains(state.Problems, p => p.Contains("Present position: Present position 12 is outside the range [-8, 8]", StringComparison.Ordinal));
+        Assert.Contains(state.Problems, p => p.StartsWith("error: Impedance: Impedance is -10", StringComparison.Ordinal));
+        Assert.DoesNotContain(state.Problems, p => p.Contains("tap.position", StringComparison.Ordinal) || p.Contains("zPercent", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_new_element_gets_a_free_id_and_blank_optional_fields_mean_not_given()
     {
         var form = new ElementForm(SampleNetwork.Build(), ElementKind.Load, null);

@@ -12,14 +12,14 @@ public static class BranchFields
 
     public static IReadOnlyList<ElementField> Line { get; } =
     [
-        Field.Id<Line>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Line>("From bus", e => e.From, (e, v) => e with { From = v }),
-        Field.Id<Line>("To bus", e => e.To, (e, v) => e with { To = v }),
-        Field.Optional<Line>("Length", "km", "", e => e.Km, (e, v) => e with { Km = v }),
+        Field.Id<Line>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Line>("From bus", e => e.From, (e, v) => e with { From = v }).Keyed("from"),
+        Field.Id<Line>("To bus", e => e.To, (e, v) => e with { To = v }).Keyed("to"),
+        Field.Optional<Line>("Length", "km", "", e => e.Km, (e, v) => e with { Km = v }).Keyed("km"),
         .. SequenceFields("1", "Positive seq.", e => e.Z1, (e, z) => e with { Z1 = z }),
-        Field.Optional<Line>("Rating", "MVA", "none", e => e.RatingMva, (e, v) => e with { RatingMva = v }),
+        Field.Optional<Line>("Rating", "MVA", "none", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
         .. SequenceFields("0", "Zero seq.", e => e.Z0, (e, z) => e with { Z0 = z }),
-        Field.Flag<Line>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Flag<Line>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     /// <summary>
@@ -37,12 +37,12 @@ public static class BranchFields
         return
         [
             Field.Named<Line, ImpedanceBasis>($"{title} per", Bases, ImpedanceBasis.PerKm, e => get(e)?.Per ?? ImpedanceBasis.PerKm,
-                (e, v) => Edit(e, z => z with { Per = v })),
+                (e, v) => Edit(e, z => z with { Per = v })).Keyed($"z{n}.per"),
             Field.Optional<Line>($"R{n}", "Ω(/km)|pu", "", e => Given(get(e)?.R ?? double.NaN),
-                (e, v) => Edit(e, z => z with { R = v ?? double.NaN })),
+                (e, v) => Edit(e, z => z with { R = v ?? double.NaN })).Keyed($"z{n}.r"),
             Field.Optional<Line>($"X{n}", "Ω(/km)|pu", "", e => Given(get(e)?.X ?? double.NaN),
-                (e, v) => Edit(e, z => z with { X = v ?? double.NaN })),
-            Field.Optional<Line>($"B{n}", "µS(/km)|pu", "0", e => get(e)?.B, (e, v) => get(e) is null && v is null ? e : Edit(e, z => z with { B = v })),
+                (e, v) => Edit(e, z => z with { X = v ?? double.NaN })).Keyed($"z{n}.x"),
+            Field.Optional<Line>($"B{n}", "µS(/km)|pu", "0", e => get(e)?.B, (e, v) => get(e) is null && v is null ? e : Edit(e, z => z with { B = v })).Keyed($"z{n}.b"),
         ];
     }
 
@@ -54,45 +54,45 @@ public static class BranchFields
 
     public static IReadOnlyList<ElementField> Transformer { get; } =
     [
-        Field.Id<Transformer>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Transformer>("HV bus", e => e.Hv, (e, v) => e with { Hv = v }),
-        Field.Id<Transformer>("LV bus", e => e.Lv, (e, v) => e with { Lv = v }),
-        Field.Optional<Transformer>("Rating", "MVA", "", e => e.Mva, (e, v) => e with { Mva = v }),
-        Field.Optional<Transformer>("HV", "kV", "", e => e.HvKv, (e, v) => e with { HvKv = v }),
-        Field.Optional<Transformer>("LV", "kV", "", e => e.LvKv, (e, v) => e with { LvKv = v }),
-        Field.Optional<Transformer>("Z", "%", "", e => e.ZPercent, (e, v) => e with { ZPercent = v }),
-        Field.Optional<Transformer>("X/R", "", "", e => e.Xr, (e, v) => e with { Xr = v }),
-        Field.Optional<Transformer>("Z0", "%", "= Z", e => e.Z0Percent, (e, v) => e with { Z0Percent = v }),
-        Field.Integer<Transformer>("Units", "", 1, e => e.Units, (e, v) => e with { Units = v }),
-        Field.Text<Transformer>("Vector group", e => e.VectorGroup, (e, v) => e with { VectorGroup = v }),
+        Field.Id<Transformer>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Transformer>("HV bus", e => e.Hv, (e, v) => e with { Hv = v }).Keyed("hv"),
+        Field.Id<Transformer>("LV bus", e => e.Lv, (e, v) => e with { Lv = v }).Keyed("lv"),
+        Field.Optional<Transformer>("Rated power", "MVA", "", e => e.Mva, (e, v) => e with { Mva = v }).Keyed("mva"),
+        Field.Optional<Transformer>("HV winding", "kV", "", e => e.HvKv, (e, v) => e with { HvKv = v }).Keyed("hvKv"),
+        Field.Optional<Transformer>("LV winding", "kV", "", e => e.LvKv, (e, v) => e with { LvKv = v }).Keyed("lvKv"),
+        Field.Optional<Transformer>("Impedance", "%", "", e => e.ZPercent, (e, v) => e with { ZPercent = v }).Keyed("zPercent"),
+        Field.Optional<Transformer>("X/R", "", "", e => e.Xr, (e, v) => e with { Xr = v }).Keyed("xr"),
+        Field.Optional<Transformer>("Zero-seq. imp.", "%", "= Z", e => e.Z0Percent, (e, v) => e with { Z0Percent = v }).Keyed("z0Percent"),
+        Field.Integer<Transformer>("Units", "", 1, e => e.Units, (e, v) => e with { Units = v }).Keyed("units"),
+        Field.Text<Transformer>("Vector group", e => e.VectorGroup, (e, v) => e with { VectorGroup = v }).Keyed("vectorGroup"),
         .. TapFields.For<Transformer>(e => e.Tap, (e, t) => e with { Tap = TapFields.Normalise(t) }),
-        Field.Number<Transformer>("Phase shift", "°", 0, e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }),
-        Field.Optional<Transformer>("Loading rating", "MVA", "= rating", e => e.RatingMva, (e, v) => e with { RatingMva = v }),
-        Field.Optional<Transformer>("R", "pu", "", e => e.RPu, (e, v) => e with { RPu = v }),
-        Field.Optional<Transformer>("X", "pu", "", e => e.XPu, (e, v) => e with { XPu = v }),
-        Field.Optional<Transformer>("Ratio", "pu", "", e => e.Ratio, (e, v) => e with { Ratio = v }),
-        Field.Flag<Transformer>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Number<Transformer>("Phase shift", "°", 0, e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }).Keyed("phaseShiftDeg"),
+        Field.Optional<Transformer>("Loading rating", "MVA", "= rating", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
+        Field.Optional<Transformer>("R", "pu", "", e => e.RPu, (e, v) => e with { RPu = v }).Keyed("rPu"),
+        Field.Optional<Transformer>("X", "pu", "", e => e.XPu, (e, v) => e with { XPu = v }).Keyed("xPu"),
+        Field.Optional<Transformer>("Ratio", "pu", "", e => e.Ratio, (e, v) => e with { Ratio = v }).Keyed("ratio"),
+        Field.Flag<Transformer>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> ThreeWinding { get; } =
     [
-        Field.Id<ThreeWindingTransformer>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<ThreeWindingTransformer>("HV bus", e => e.Hv, (e, v) => e with { Hv = v }),
-        Field.Id<ThreeWindingTransformer>("MV bus", e => e.Mv, (e, v) => e with { Mv = v }),
-        Field.Id<ThreeWindingTransformer>("LV bus", e => e.Lv, (e, v) => e with { Lv = v }),
-        Field.Number<ThreeWindingTransformer>("HV", "kV", 0, e => e.HvKv, (e, v) => e with { HvKv = v }),
-        Field.Number<ThreeWindingTransformer>("MV", "kV", 0, e => e.MvKv, (e, v) => e with { MvKv = v }),
-        Field.Number<ThreeWindingTransformer>("LV", "kV", 0, e => e.LvKv, (e, v) => e with { LvKv = v }),
-        Field.Number<ThreeWindingTransformer>("HV rating", "MVA", 0, e => e.MvaHv, (e, v) => e with { MvaHv = v }),
-        Field.Number<ThreeWindingTransformer>("MV rating", "MVA", 0, e => e.MvaMv, (e, v) => e with { MvaMv = v }),
-        Field.Number<ThreeWindingTransformer>("LV rating", "MVA", 0, e => e.MvaLv, (e, v) => e with { MvaLv = v }),
-        Field.Number<ThreeWindingTransformer>("Z HV-MV", "%", 0, e => e.ZHmPercent, (e, v) => e with { ZHmPercent = v }),
-        Field.Number<ThreeWindingTransformer>("Z HV-LV", "%", 0, e => e.ZHlPercent, (e, v) => e with { ZHlPercent = v }),
-        Field.Number<ThreeWindingTransformer>("Z MV-LV", "%", 0, e => e.ZMlPercent, (e, v) => e with { ZMlPercent = v }),
-        Field.Number<ThreeWindingTransformer>("Z base", "MVA", 0, e => e.ZBaseMva, (e, v) => e with { ZBaseMva = v }),
-        Field.Number<ThreeWindingTransformer>("X/R", "", 30, e => e.Xr, (e, v) => e with { Xr = v }),
-        Field.Text<ThreeWindingTransformer>("Vector group", e => e.VectorGroup, (e, v) => e with { VectorGroup = v }),
+        Field.Id<ThreeWindingTransformer>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<ThreeWindingTransformer>("HV bus", e => e.Hv, (e, v) => e with { Hv = v }).Keyed("hv"),
+        Field.Id<ThreeWindingTransformer>("MV bus", e => e.Mv, (e, v) => e with { Mv = v }).Keyed("mv"),
+        Field.Id<ThreeWindingTransformer>("LV bus", e => e.Lv, (e, v) => e with { Lv = v }).Keyed("lv"),
+        Field.Number<ThreeWindingTransformer>("HV", "kV", 0, e => e.HvKv, (e, v) => e with { HvKv = v }).Keyed("hvKv"),
+        Field.Number<ThreeWindingTransformer>("MV", "kV", 0, e => e.MvKv, (e, v) => e with { MvKv = v }).Keyed("mvKv"),
+        Field.Number<ThreeWindingTransformer>("LV", "kV", 0, e => e.LvKv, (e, v) => e with { LvKv = v }).Keyed("lvKv"),
+        Field.Number<ThreeWindingTransformer>("HV rating", "MVA", 0, e => e.MvaHv, (e, v) => e with { MvaHv = v }).Keyed("mvaHv"),
+        Field.Number<ThreeWindingTransformer>("MV rating", "MVA", 0, e => e.MvaMv, (e, v) => e with { MvaMv = v }).Keyed("mvaMv"),
+        Field.Number<ThreeWindingTransformer>("LV rating", "MVA", 0, e => e.MvaLv, (e, v) => e with { MvaLv = v }).Keyed("mvaLv"),
+        Field.Number<ThreeWindingTransformer>("Z HV-MV", "%", 0, e => e.ZHmPercent, (e, v) => e with { ZHmPercent = v }).Keyed("zHmPercent"),
+        Field.Number<ThreeWindingTransformer>("Z HV-LV", "%", 0, e => e.ZHlPercent, (e, v) => e with { ZHlPercent = v }).Keyed("zHlPercent"),
+        Field.Number<ThreeWindingTransformer>("Z MV-LV", "%", 0, e => e.ZMlPercent, (e, v) => e with { ZMlPercent = v }).Keyed("zMlPercent"),
+        Field.Number<ThreeWindingTransformer>("Z base", "MVA", 0, e => e.ZBaseMva, (e, v) => e with { ZBaseMva = v }).Keyed("zBaseMva"),
+        Field.Number<ThreeWindingTransformer>("X/R", "", 30, e => e.Xr, (e, v) => e with { Xr = v }).Keyed("xr"),
+        Field.Text<ThreeWindingTransformer>("Vector group", e => e.VectorGroup, (e, v) => e with { VectorGroup = v }).Keyed("vectorGroup"),
         .. TapFields.For<ThreeWindingTransformer>(e => e.Tap, (e, t) => e with { Tap = TapFields.Normalise(t) }),
-        Field.Flag<ThreeWindingTransformer>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Flag<ThreeWindingTransformer>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 }

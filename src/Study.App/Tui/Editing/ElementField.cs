@@ -16,6 +16,12 @@ public sealed record ElementField(
 {
     /// <summary>"Name unit", as used for labels and table headers.</summary>
     public string Header => Unit.Length > 0 ? $"{Name} {Unit}" : Name;
+
+    /// <summary>The network-file key the field edits ("kv", "tap.position"), so validation messages can name the field by its label.</summary>
+    public string? Key { get; init; }
+
+    /// <summary>This field, editing the file key <paramref name="key"/>.</summary>
+    public ElementField Keyed(string key) => this with { Key = key };
 }
 
 /// <summary>Builders for typed fields; empty text means "not given" for optional values.</summary>

@@ -74,8 +74,28 @@ public sealed class ElementForm
         foreach (Problem p in NetworkValidator.ValidateElement(candidate, Kind, id))
         {
             string severity = p.Severity == Severity.Error ? "error" : "warning";
-            problems.Add(p.Field is null ? $"{severity}: {p.Message}" : $"{severity}: {p.Field}: {p.Message}");
+            string message = InLabels(p.Message);
+            problems.Add(p.Field is null ? $"{severity}: {message}" : $"{severity}: {LabelOf(p.Field)}: {message}");
         }
         return new FormState(element, problems, PerUnitPreview.Lines(candidate, Kind, id));
     }
+
+    /// <summary>The form's label for a file key ("Present position" for tap.position); the key itself when no field edits it.</summary>
+    public string LabelOf(string key) => Labels().GetValueOrDefault(key) ?? key;
+
+    /// <summary>
+    /// A validator message in the form's words: every file key a field edits is replaced by that field's
+    /// label, longest keys first, so "tap.position 9 is outside the range" reads "Present position 9 …".
+    /// </summary>
+    public string InLabels(string message)
+    {
+        foreach (var (key, label) in Labels().OrderByDescending(k => k.Key.Length))
+            message = System.Text.RegularExpressions.Regex.Replace(message,
+                $@"(?<![\w.]){System.Text.RegularExpressions.Regex.Escape(key)}(?![\w])", label);
+        return message;
+    }
+
+    /// <summary>Each file key with the label of the field (or fields, joined: "Lowest position / Highest position") that edit it.</summary>
+    private Dictionary<string, string> Labels() => Fields.Where(f => f.Key is not null).GroupBy(f => f.Key!)
+        .ToDictionary(g => g.Key, g => string.Join(" / ", g.Select(f => f.Name)));
 }

@@ -8,53 +8,53 @@ public static class NodeFields
 {
     public static IReadOnlyList<ElementField> Bus { get; } =
     [
-        Field.Id<Bus>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Number<Bus>("Base", "kV", 0, e => e.Kv, (e, v) => e with { Kv = v }),
-        Field.Number<Bus>("Vmin", "pu", 0.95, e => e.VMin, (e, v) => e with { VMin = v }),
-        Field.Number<Bus>("Vmax", "pu", 1.05, e => e.VMax, (e, v) => e with { VMax = v }),
-        Field.Text<Bus>("Zone", e => e.Zone, (e, v) => e with { Zone = v }),
-        Field.Text<Bus>("Name", e => e.Name, (e, v) => e with { Name = v }),
-        Field.Flag<Bus>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Id<Bus>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Number<Bus>("Base", "kV", 0, e => e.Kv, (e, v) => e with { Kv = v }).Keyed("kv"),
+        Field.Number<Bus>("Vmin", "pu", 0.95, e => e.VMin, (e, v) => e with { VMin = v }).Keyed("vMin"),
+        Field.Number<Bus>("Vmax", "pu", 1.05, e => e.VMax, (e, v) => e with { VMax = v }).Keyed("vMax"),
+        Field.Text<Bus>("Zone", e => e.Zone, (e, v) => e with { Zone = v }).Keyed("zone"),
+        Field.Text<Bus>("Name", e => e.Name, (e, v) => e with { Name = v }).Keyed("name"),
+        Field.Flag<Bus>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> Load { get; } =
     [
-        Field.Id<Load>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Load>("Bus", e => e.Bus, (e, v) => e with { Bus = v }),
-        Field.Number<Load>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }),
-        Field.Number<Load>("Q", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }),
+        Field.Id<Load>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Load>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.Number<Load>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
+        Field.Number<Load>("Q", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
         Field.Number<Load>("Const. Z share", "", 0, e => (e.Zip ?? ZipMix.ConstantPower).Z,
-            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { Z = v } }),
+            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { Z = v } }).Keyed("zip"),
         Field.Number<Load>("Const. I share", "", 0, e => (e.Zip ?? ZipMix.ConstantPower).I,
-            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { I = v } }),
+            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { I = v } }).Keyed("zip"),
         Field.Number<Load>("Const. P share", "", 1, e => (e.Zip ?? ZipMix.ConstantPower).P,
-            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { P = v } }),
-        Field.Flag<Load>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+            (e, v) => e with { Zip = (e.Zip ?? ZipMix.ConstantPower) with { P = v } }).Keyed("zip"),
+        Field.Flag<Load>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> Shunt { get; } =
     [
-        Field.Id<Shunt>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Shunt>("Bus", e => e.Bus, (e, v) => e with { Bus = v }),
-        Field.Number<Shunt>("Q (+cap)", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }),
-        Field.Number<Shunt>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }),
-        Field.Flag<Shunt>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Id<Shunt>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Shunt>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.Number<Shunt>("Q (+cap)", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
+        Field.Number<Shunt>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
+        Field.Flag<Shunt>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> Breaker { get; } =
     [
-        Field.Id<Breaker>("Id", e => e.Id, (e, v) => e with { Id = v }),
-        Field.Id<Breaker>("Bus", e => e.Bus, (e, v) => e with { Bus = v }),
-        Field.Number<Breaker>("Breaking", "kA", 0, e => e.InterruptingKa, (e, v) => e with { InterruptingKa = v }),
-        Field.Number<Breaker>("Peak", "kA", 0, e => e.PeakKa, (e, v) => e with { PeakKa = v }),
-        Field.Flag<Breaker>("In service", true, e => e.InService, (e, v) => e with { InService = v }),
+        Field.Id<Breaker>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Breaker>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.Number<Breaker>("Breaking", "kA", 0, e => e.InterruptingKa, (e, v) => e with { InterruptingKa = v }).Keyed("interruptingKa"),
+        Field.Number<Breaker>("Peak", "kA", 0, e => e.PeakKa, (e, v) => e with { PeakKa = v }).Keyed("peakKa"),
+        Field.Flag<Breaker>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> Scenario { get; } =
     [
-        Field.Id<Scenario>("Name", e => e.Name, (e, v) => e with { Name = v }),
-        Field.Number<Scenario>("Load scale", "", 1, e => e.LoadScale, (e, v) => e with { LoadScale = v }),
-        Field.Optional<Scenario>("Generation scale", "", "1", e => e.GenerationScale, (e, v) => e with { GenerationScale = v }),
-        Field.Text<Scenario>("Description", e => e.Description, (e, v) => e with { Description = v }),
+        Field.Id<Scenario>("Name", e => e.Name, (e, v) => e with { Name = v }).Keyed("name"),
+        Field.Number<Scenario>("Load scale", "", 1, e => e.LoadScale, (e, v) => e with { LoadScale = v }).Keyed("loadScale"),
+        Field.Optional<Scenario>("Generation scale", "", "1", e => e.GenerationScale, (e, v) => e with { GenerationScale = v }).Keyed("generationScale"),
+        Field.Text<Scenario>("Description", e => e.Description, (e, v) => e with { Description = v }).Keyed("description"),
     ];
 }

@@ -12,19 +12,19 @@ public static class TapFields
         TapRegulation Reg(TapChanger t) => t.Regulate ?? new TapRegulation { Bus = "" };
         return
         [
-            Field.Choice<T, TapWinding>("Tapped winding", TapWinding.Hv, e => get(e)?.Winding ?? TapWinding.Hv, (e, v) => Edit(e, t => t with { Winding = v })),
-            Field.Number<T>("Step size", "%", 0, e => get(e)?.PercentPerStep ?? 0, (e, v) => Edit(e, t => t with { PercentPerStep = v })),
-            Field.Integer<T>("Lowest position", "", 0, e => get(e)?.Range.Lowest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Lowest = v } })),
-            Field.Integer<T>("Highest position", "", 0, e => get(e)?.Range.Highest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Highest = v } })),
-            Field.Integer<T>("Present position", "", 0, e => get(e)?.Position ?? 0, (e, v) => Edit(e, t => t with { Position = v })),
+            Field.Choice<T, TapWinding>("Tapped winding", TapWinding.Hv, e => get(e)?.Winding ?? TapWinding.Hv, (e, v) => Edit(e, t => t with { Winding = v })).Keyed("tap.winding"),
+            Field.Number<T>("Step size", "%", 0, e => get(e)?.PercentPerStep ?? 0, (e, v) => Edit(e, t => t with { PercentPerStep = v })).Keyed("tap.percentPerStep"),
+            Field.Integer<T>("Lowest position", "", 0, e => get(e)?.Range.Lowest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Lowest = v } })).Keyed("tap.range"),
+            Field.Integer<T>("Highest position", "", 0, e => get(e)?.Range.Highest ?? 0, (e, v) => Edit(e, t => t with { Range = t.Range with { Highest = v } })).Keyed("tap.range"),
+            Field.Integer<T>("Present position", "", 0, e => get(e)?.Position ?? 0, (e, v) => Edit(e, t => t with { Position = v })).Keyed("tap.position"),
             Field.Text<T>("Regulated bus", e => get(e)?.Regulate?.Bus, (e, v) => Edit(e, t => t with
             {
                 Regulate = v is null ? null : Reg(t) with { Bus = v },
-            })),
+            })).Keyed("tap.regulate.bus"),
             Field.Number<T>("Target voltage", "pu", 1, e => get(e)?.Regulate?.VTarget ?? 1,
-                (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { VTarget = v } })),
+                (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { VTarget = v } })).Keyed("tap.regulate.vTarget"),
             Field.Number<T>("Dead band", "pu", 0.015, e => get(e)?.Regulate?.BandPu ?? 0.015,
-                (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { BandPu = v } })),
+                (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { BandPu = v } })).Keyed("tap.regulate.bandPu"),
         ];
     }
 
