@@ -1,93 +1,51 @@
-// A small, strict reader of command-line arguments: positionals, --flags and --options with values.
+// The parsed command line of one subcommand, read through the names it declared.
+using System.CommandLine;
 using System.Globalization;
 
 namespace Study.App.Cli;
 
 /// <summary>
-/// Parsed arguments of one subcommand. Each command declares the options it knows; anything else is
-/// a usage error, so a typo never silently changes a study.
+/// Values of the declared positionals and options. Anything the declaration does not know was already
+/// refused by the parser; the readers here turn text into numbers, pairs and lists with messages that
+/// say what was expected, so a typo never silently changes a study.
 /// </summary>
 public sealed class Arguments
 {
-    private readonly List<string> positionals = [];
-    private readonly Dictionary<string, List<string>> options = new(StringComparer.Ordinal);
-    private readonly HashSet<string> flags = new(StringComparer.Ordinal);
+    private readonly ParseResult parsed;
+    private readonly Declaration declaration;
 
-    /// <param name="args">The arguments after the subcommand name.</param>
-    /// <param name="valueOptions">Options that take values (without "--"); a trailing "*" means "many values until the next option".</param>
-    /// <param name="flagOptions">Options that take no value.</param>
-    public Arguments(IReadOnlyList<string> args, IEnumerable<string> valueOptions, IEnumerable<string> flagOptions)
+    internal Arguments(ParseResult parsed, Declaration declaration)
     {
-        var single = new HashSet<string>();
-        var many = new HashSet<string>();
-        foreach (string o in valueOptions)
-        {
-            if (o.EndsWith('*')) many.Add(o.TrimEnd('*'));
-            else single.Add(o);
-        }
-        var flagSet = flagOptions.ToHashSet();
-        for (int i = 0; i < args.Count; i++)
-        {
-            string a = args[i];
-            if (!a.StartsWith("--", StringComparison.Ordinal) || a == "--")
-            {
-                positionals.Add(a);
-                continue;
-            }
-            string name = a[2..];
-            string? inline = null;
-            int eq = name.IndexOf('=');
-            if (eq >= 0)
-            {
-                inline = name[(eq + 1)..];
-                name = name[..eq];
-            }
-            if (flagSet.Contains(name))
-            {
-                if (inline is not null) throw new UsageException($"--{name} takes no value");
-                flags.Add(name);
-            }
-            else if (single.Contains(name) || many.Contains(name))
-            {
-                var values = options.TryGetValue(name, out var existing) ? existing : options[name] = [];
-                if (inline is not null) values.Add(inline);
-                else if (many.Contains(name))
-                {
-                    while (i + 1 < args.Count && !args[i + 1].StartsWith("--", StringComparison.Ordinal)) values.Add(args[++i]);
-                    if (values.Count == 0) throw new UsageException($"--{name} needs at least one value");
-                }
-                else
-                {
-                    if (i + 1 >= args.Count) throw new UsageException($"--{name} needs a value");
-                    values.Add(args[++i]);
-                }
-                if (single.Contains(name) && values.Count > 1) throw new UsageException($"--{name} is given more than once");
-            }
-            else
-            {
-                var known = single.Concat(many).Concat(flagSet).Select(k => "--" + k).Order();
-                throw new UsageException($"unknown option --{name} (this command knows: {string.Join(", ", known)})");
-            }
-        }
+        this.parsed = parsed;
+        this.declaration = declaration;
     }
 
-    public IReadOnlyList<string> Positionals => positionals;
+    public bool Has(string flag) => Option(flag) is Option<bool> o && parsed.GetValue(o);
 
-    public bool Has(string flag) => flags.Contains(flag);
+    /// <summary>The positional at <paramref name="index"/>; a usage error naming <paramref name="what"/> when it was left out.</summary>
+    public string Positional(int index, string what) => PositionalOrNull(index) ?? throw new UsageException($"missing {what}");
 
-    public string Positional(int index, string what) =>
-        index < positionals.Count ? positionals[index] : throw new UsageException($"missing {what}");
+    public string? PositionalOrNull(int index) =>
+        index < declaration.Positionals.Count ? parsed.GetValue(declaration.Positionals[index]) : null;
 
-    public void ExpectPositionals(int count)
+    public string? Value(string name) => Option(name) switch
     {
-        if (positionals.Count > count)
-            throw new UsageException($"unexpected argument '{positionals[count]}'");
+        Option<string?> single => parsed.GetValue(single),
+        Option<string[]> many => parsed.GetValue(many) is { Length: > 0 } v ? v[0] : null,
+        _ => null,
+    };
+
+    /// <summary>Every value of a many-valued option, commas splitting values as spaces do.</summary>
+    public IReadOnlyList<string> Values(string name)
+    {
+        string[] raw = Option(name) switch
+        {
+            Option<string[]> many => parsed.GetValue(many) ?? [],
+            Option<string?> single => parsed.GetValue(single) is string s ? [s] : [],
+            _ => [],
+        };
+        return raw.SelectMany(s => s.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).ToList();
     }
-
-    public string? Value(string name) => options.TryGetValue(name, out var v) ? v[0] : null;
-
-    public IReadOnlyList<string> Values(string name) =>
-        options.TryGetValue(name, out var v) ? v.SelectMany(s => s.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).ToList() : [];
 
     public double? Number(string name)
     {
@@ -119,4 +77,7 @@ public sealed class Arguments
             return (a, b);
         throw new UsageException($"--{name} needs two numbers separated by a comma, got '{text}'");
     }
+
+    private Option? Option(string name) =>
+        declaration.Find(name) ?? throw new InvalidOperationException($"option --{name} is read but not declared");
 }

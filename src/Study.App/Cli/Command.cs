@@ -1,4 +1,7 @@
-// What every subcommand of `study` provides: its name, usage text, the options it knows, and Run.
+// What every subcommand of `study` provides: its name, summary, the arguments and options it declares once, and Run.
+using System.CommandLine;
+using SclCommand = System.CommandLine.Command;
+
 namespace Study.App.Cli;
 
 /// <summary>Where a command writes: standard output for results, standard error for messages.</summary>
@@ -11,23 +14,91 @@ public sealed record CommandContext(TextWriter Out, TextWriter Err)
     public Stream? OutStream { get; init; }
 }
 
-/// <summary>A subcommand. The CLI layer only parses, calls the engine and renders the result record.</summary>
-public abstract class Command
+/// <summary>A command-line mistake: unknown option, missing argument, bad value. Exit code 2, with the command's usage.</summary>
+public sealed class UsageException(string message) : Exception(message);
+
+/// <summary>Process exit codes of the study command (README, Commands).</summary>
+public static class ExitCode
+{
+    /// <summary>The work was done; violations are reported, not failures.</summary>
+    public const int Done = 0;
+    /// <summary>Bad input: file, syntax, reference, physical data or command-line usage.</summary>
+    public const int InputError = 2;
+    /// <summary>The load flow did not converge.</summary>
+    public const int NoConvergence = 3;
+    /// <summary>A fault in the program itself.</summary>
+    public const int Internal = 4;
+}
+
+/// <summary>
+/// A subcommand. It declares its arguments and options once (<see cref="Declare"/>); usage, help and
+/// parsing all come from that declaration (System.CommandLine). The command then only reads the
+/// parsed values, calls the engine and renders the result record.
+/// </summary>
+public abstract class CliCommand
 {
     public abstract string Name { get; }
     public abstract string Summary { get; }
-    /// <summary>One usage line, e.g. "study check FILE [--json]".</summary>
-    public abstract string Usage { get; }
-    /// <summary>Lines describing each option, shown by `study help NAME`.</summary>
-    public virtual IReadOnlyList<string> OptionHelp => [];
-    protected virtual IEnumerable<string> ValueOptions => [];
-    protected virtual IEnumerable<string> Flags => ["json"];
 
-    /// <summary>Single-dash short forms of this command's options, e.g. "-o" for "--output".</summary>
-    protected virtual IReadOnlyDictionary<string, string> ShortForms { get; } = new Dictionary<string, string>();
-
-    public int Run(IReadOnlyList<string> args, CommandContext context) =>
-        Execute(new Arguments(args.Select(a => ShortForms.TryGetValue(a, out string? full) ? full : a).ToList(), ValueOptions, Flags), context);
+    /// <summary>The positional arguments and options, each with the words its help shows.</summary>
+    protected abstract void Declare(Declaration declare);
 
     protected abstract int Execute(Arguments args, CommandContext context);
+
+    /// <summary>The System.CommandLine command built from the declaration (once per run).</summary>
+    internal SclCommand Build(out Declaration declaration)
+    {
+        var command = new SclCommand(Name, Summary);
+        declaration = new Declaration(command);
+        Declare(declaration);
+        return command;
+    }
+
+    internal int Run(ParseResult parsed, Declaration declaration, CommandContext context) =>
+        Execute(new Arguments(parsed, declaration), context);
+}
+
+/// <summary>
+/// Declares a command's positionals and options on its System.CommandLine command. Values are taken as
+/// text and read by <see cref="Arguments"/>, whose messages say what was expected in plain words.
+/// </summary>
+public sealed class Declaration(SclCommand command)
+{
+    private readonly List<Argument<string?>> positionals = [];
+    private readonly Dictionary<string, Option> options = new(StringComparer.Ordinal);
+
+    internal IReadOnlyList<Argument<string?>> Positionals => positionals;
+
+    internal Option? Find(string name) => options.GetValueOrDefault(name);
+
+    /// <summary>A positional argument; <paramref name="required"/> false lets it be left out.</summary>
+    public Declaration Positional(string name, string description, bool required = true)
+    {
+        var argument = new Argument<string?>(name) { Description = description, Arity = required ? ArgumentArity.ExactlyOne : ArgumentArity.ZeroOrOne };
+        positionals.Add(argument);
+        command.Arguments.Add(argument);
+        return this;
+    }
+
+    /// <summary>An option with one value, named <paramref name="valueName"/> in the help (--scenario NAME).</summary>
+    public Declaration Value(string name, string valueName, string description, params string[] aliases) =>
+        Add(name, new Option<string?>("--" + name, aliases) { Description = description, HelpName = valueName, Arity = ArgumentArity.ExactlyOne });
+
+    /// <summary>An option with one or more values, separated by spaces or commas (--bus A B, --type 3ph,slg).</summary>
+    public Declaration Many(string name, string valueName, string description) =>
+        Add(name, new Option<string[]>("--" + name)
+        {
+            Description = description, HelpName = valueName, Arity = ArgumentArity.OneOrMore, AllowMultipleArgumentsPerToken = true,
+        });
+
+    /// <summary>An option without a value.</summary>
+    public Declaration Flag(string name, string description) =>
+        Add(name, new Option<bool>("--" + name) { Description = description, Arity = ArgumentArity.Zero });
+
+    private Declaration Add(string name, Option option)
+    {
+        options.Add(name, option);
+        command.Options.Add(option);
+        return this;
+    }
 }

@@ -1,4 +1,6 @@
-// Entry point of the command line: picks the subcommand, runs it, turns failures into exit codes.
+// Entry point of the command line: picks the subcommand, parses what it declared, runs it, turns failures into exit codes.
+using System.CommandLine;
+using System.CommandLine.Help;
 using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
@@ -11,13 +13,13 @@ using Study.Core.Model;
 namespace Study.App.Cli;
 
 /// <summary>
-/// Dispatches `study SUBCOMMAND ...`. Input problems become one readable message and exit 2;
-/// anything unexpected becomes exit 4 with a one-line message — never a stack trace
-/// (set STUDY_DEBUG=1 to see one).
+/// Dispatches `study SUBCOMMAND ...`. Usage mistakes and input problems become one readable message and
+/// exit 2; anything unexpected becomes exit 4 with a one-line message — never a stack trace (set
+/// STUDY_DEBUG=1 to see one). `study COMMAND --help` and `study help COMMAND` show the same help, exit 0.
 /// </summary>
 public static class StudyCommand
 {
-    public static IReadOnlyList<Command> All { get; } =
+    public static IReadOnlyList<CliCommand> All { get; } =
     [
         new CheckCommand(),
         new ConvertCommand(),
@@ -33,23 +35,40 @@ public static class StudyCommand
 
     public static int Run(IReadOnlyList<string> args, CommandContext context)
     {
-        if (args.Count == 0 || args[0] is "help" or "--help" or "-h")
-            return Help(args.Skip(1).FirstOrDefault(), context);
-        Command? command = All.FirstOrDefault(c => c.Name == args[0]);
-        if (command is null)
+        if (args.Count == 0 || args[0] is "help" or "--help" or "-h" or "-?")
         {
-            context.Err.WriteLine($"study: unknown command '{args[0]}'. Commands: {string.Join(", ", All.Select(c => c.Name))}.");
-            context.Err.WriteLine("Run 'study help' for usage.");
+            string? topic = args.Skip(1).FirstOrDefault();
+            if (topic is null) return Overview(context);
+            if (Find(topic) is null) return Unknown(topic, context);
+            return Run([topic, "--help"], context);
+        }
+        if (Find(args[0]) is not CliCommand command) return Unknown(args[0], context);
+
+        // A plain command named "study" as the root, so the usage line says "study" whatever the process is called.
+        var root = new System.CommandLine.Command("study");
+        System.CommandLine.Command built = command.Build(out Declaration declaration);
+        built.Options.Add(new HelpOption());
+        root.Subcommands.Add(built);
+        ParseResult parsed = root.Parse(args.ToArray());
+        if (parsed.Action is HelpAction)
+        {
+            parsed.Invoke(new InvocationConfiguration { Output = context.Out, Error = context.Err });
+            return ExitCode.Done;
+        }
+        if (parsed.Errors.Count > 0)
+        {
+            foreach (var error in parsed.Errors) context.Err.WriteLine($"study {command.Name}: {Plain(error.Message, declaration)}");
+            context.Err.WriteLine($"'study {command.Name} --help' lists its arguments and options.");
             return ExitCode.InputError;
         }
         try
         {
-            return command.Run(args.Skip(1).ToList(), context);
+            return command.Run(parsed, declaration, context);
         }
         catch (UsageException e)
         {
             context.Err.WriteLine($"study {command.Name}: {e.Message}");
-            context.Err.WriteLine($"usage: {command.Usage}");
+            context.Err.WriteLine($"'study {command.Name} --help' lists its arguments and options.");
             return ExitCode.InputError;
         }
         catch (InputException e)
@@ -65,26 +84,37 @@ public static class StudyCommand
         }
     }
 
-    public static bool IsCommand(string name) => name is "help" or "--help" or "-h" || All.Any(c => c.Name == name);
+    public static bool IsCommand(string name) => name is "help" or "--help" or "-h" or "-?" || Find(name) is not null;
 
-    private static int Help(string? name, CommandContext context)
+    private static CliCommand? Find(string name) => All.FirstOrDefault(c => c.Name == name);
+
+    private static int Unknown(string name, CommandContext context)
     {
-        Command? command = name is null ? null : All.FirstOrDefault(c => c.Name == name);
-        if (command is not null)
-        {
-            context.Out.WriteLine($"usage: {command.Usage}");
-            context.Out.WriteLine($"  {command.Summary}");
-            foreach (string line in command.OptionHelp) context.Out.WriteLine("  " + line);
-            return ExitCode.Done;
-        }
-        context.Out.WriteLine("study: load flow, tap choice and fault levels on single-line networks");
-        context.Out.WriteLine();
-        context.Out.WriteLine("  study                 open the terminal UI on the bundled demo network");
-        context.Out.WriteLine("  study FILE            open the terminal UI on FILE");
-        foreach (Command c in All) context.Out.WriteLine($"  {c.Usage}");
-        context.Out.WriteLine();
-        context.Out.WriteLine("Exit codes: 0 done, 2 input error, 3 no convergence, 4 internal error.");
-        context.Out.WriteLine("'study help COMMAND' shows a command's options.");
-        return name is null ? ExitCode.Done : ExitCode.InputError;
+        context.Err.WriteLine($"study: unknown command '{name}'. Commands: {string.Join(", ", All.Select(c => c.Name))}.");
+        context.Err.WriteLine("Run 'study help' for usage.");
+        return ExitCode.InputError;
+    }
+
+    /// <summary>The parser's messages in the words of the rest of the program; a missing positional is named with what it is.</summary>
+    private static string Plain(string message, Declaration declaration)
+    {
+        if (message.StartsWith("Required argument missing", StringComparison.Ordinal)
+            && declaration.Positionals.FirstOrDefault(p => p.Arity.MinimumNumberOfValues > 0) is { } first)
+            return $"missing {first.Name} ({first.Description})";
+        return message.Replace("Unrecognized command or argument", "unknown argument or option");
+    }
+
+    private static int Overview(CommandContext context)
+    {
+        TextWriter o = context.Out;
+        o.WriteLine("study: load flow, tap choice and fault levels on single-line networks");
+        o.WriteLine();
+        o.WriteLine("  study                 open the terminal UI on the bundled demo network");
+        o.WriteLine("  study FILE            open the terminal UI on FILE");
+        foreach (CliCommand c in All) o.WriteLine($"  study {c.Name,-15} {c.Summary}");
+        o.WriteLine();
+        o.WriteLine("Exit codes: 0 done, 2 input error, 3 no convergence, 4 internal error.");
+        o.WriteLine("'study COMMAND --help' (or 'study help COMMAND') shows a command's arguments and options.");
+        return ExitCode.Done;
     }
 }

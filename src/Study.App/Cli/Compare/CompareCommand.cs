@@ -8,22 +8,18 @@ using Study.Core.Studies;
 
 namespace Study.App.Cli.Compare;
 
-public sealed class CompareCommand : Command
+public sealed class CompareCommand : CliCommand
 {
     public override string Name => "compare";
     public override string Summary => "compare two networks (before and after a change) or two scenarios: voltages, flows, losses, violations";
-    public override string Usage =>
-        "study compare BEFORE AFTER [--scenario NAME] | FILE --scenarios A,B  [--json] [--csv DIR] [--markdown FILE]";
-    public override IReadOnlyList<string> OptionHelp =>
-    [
-        "BEFORE AFTER       two network files, solved alike and matched bus by bus and branch by branch by id",
-        "--scenario NAME    solve both networks in this scenario (default: loads as entered)",
-        "--scenarios A,B    with one FILE: compare its scenario A (before) with its scenario B (after)",
-        "--json             machine-readable result",
-        "--csv DIR          write buses.csv, branches.csv, violations.csv and totals.csv into DIR",
-        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
-    ];
-    protected override IEnumerable<string> ValueOptions => ["scenario", "scenarios", "csv", "markdown"];
+    protected override void Declare(Declaration d) => d
+        .Positional("BEFORE", "the network before the change (or the one FILE whose scenarios --scenarios compares)")
+        .Positional("AFTER", "the network after the change, solved alike and matched by id", required: false)
+        .Value("scenario", "NAME", "solve both networks in this scenario (default: loads as entered)")
+        .Value("scenarios", "A,B", "with one FILE: compare its scenario A (before) with its scenario B (after)")
+        .Flag("json", "machine-readable result")
+        .Value("csv", "DIR", "write buses.csv, branches.csv, violations.csv and totals.csv into DIR")
+        .Value("markdown", "FILE", "write the report as Markdown, with the inputs, to attach to a study note");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
@@ -34,7 +30,6 @@ public sealed class CompareCommand : Command
         string? beforeScenario, afterScenario;
         if (args.Value("scenarios") is not null)
         {
-            args.ExpectPositionals(1);
             if (args.Value("scenario") is not null) throw new UsageException("give --scenario NAME or --scenarios A,B, not both");
             if (pair.Count != 2) throw new UsageException("--scenarios needs two scenario names separated by a comma, e.g. winter-peak,summer-night");
             before = after = NetworkLoading.Open(beforePath, context.Err);
@@ -44,7 +39,6 @@ public sealed class CompareCommand : Command
         else
         {
             afterPath = args.Positional(1, "AFTER (a network file), or --scenarios A,B to compare two scenarios of one file");
-            args.ExpectPositionals(2);
             before = NetworkLoading.Open(beforePath, context.Err);
             after = NetworkLoading.Open(afterPath, context.Err);
             beforeScenario = afterScenario = args.Value("scenario");

@@ -10,32 +10,26 @@ using Study.Core.Units;
 
 namespace Study.App.Cli.Faults;
 
-public sealed class FaultCommand : Command
+public sealed class FaultCommand : CliCommand
 {
     public override string Name => "fault";
     public override string Summary => "fault levels (I''k, S''k, i_p) at buses and breaker duty, by IEC 60909 or from a solved load flow";
-    public override string Usage =>
-        "study fault FILE [--bus ID ... | --all] [--type 3ph,slg,ll,dlg] [--zf R,X] [--method iec60909|loadflow] [--min] [--scenario NAME] [--json] [--markdown FILE] [--timings]";
-    public override IReadOnlyList<string> OptionHelp =>
-    [
-        "--bus ID ...            fault these buses only (default: every bus)",
-        "--all                   fault every bus (the default)",
-        "--type 3ph,slg,ll,dlg   fault types (default 3ph,slg)",
-        "--zf R,X                fault impedance in ohm (default 0,0: a bolted fault)",
-        "--method NAME           iec60909 (equivalent source c·Un/√3, default) or loadflow (pre-fault voltages from the load flow)",
-        "--min                   minimum levels: c_min and each supply's scMvaMin",
-        "--scenario NAME         scale loads as the named scenario does (matters for --method loadflow)",
-        "--json                  machine-readable result",
-        "--markdown FILE         write the report as Markdown, with the inputs and the caution, to attach to a study note",
-        "--timings               report the time of each stage (read, validate, build, faults, report)",
-    ];
-    protected override IEnumerable<string> ValueOptions => ["bus*", "type*", "zf", "method", "scenario", "markdown"];
-    protected override IEnumerable<string> Flags => ["json", "all", "min", "timings"];
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Many("bus", "ID", "fault these buses only (default: every bus)")
+        .Flag("all", "fault every bus (the default)")
+        .Many("type", "3ph,slg,ll,dlg", "fault types (default 3ph,slg)")
+        .Value("zf", "R,X", "fault impedance in ohm (default 0,0: a bolted fault)")
+        .Value("method", "iec60909|loadflow", "iec60909 (equivalent source c·Un/√3, default) or loadflow (pre-fault voltages from the load flow)")
+        .Flag("min", "minimum levels: c_min and each supply's scMvaMin")
+        .Value("scenario", "NAME", "scale loads as the named scenario does (matters for --method loadflow)")
+        .Flag("json", "machine-readable result")
+        .Value("markdown", "FILE", "write the report as Markdown, with the inputs and the caution, to attach to a study note")
+        .Flag("timings", "report the time of each stage (read, validate, build, faults, report)");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
-        args.ExpectPositionals(1);
         IReadOnlyList<string> buses = args.Values("bus");
         if (buses.Count > 0 && args.Has("all")) throw new UsageException("give --bus or --all, not both");
         var kinds = new List<FaultKind>();

@@ -6,16 +6,17 @@ using Study.Core.Model.Validation;
 
 namespace Study.App.Cli.Files;
 
-public sealed class CheckCommand : Command
+public sealed class CheckCommand : CliCommand
 {
     public override string Name => "check";
     public override string Summary => "validate a network file or imported case and list every problem";
-    public override string Usage => "study check FILE [--json]";
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Flag("json", "machine-readable report");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
-        args.ExpectPositionals(1);
         var (network, report) = NetworkCheck.Read(path);
         if (args.Has("json"))
             CliJson.Write(context, CheckJson.From(path, report));

@@ -5,18 +5,18 @@ using Study.Core.Model;
 
 namespace Study.App.Cli.Files;
 
-public sealed class ConvertCommand : Command
+public sealed class ConvertCommand : CliCommand
 {
     public override string Name => "convert";
     public override string Summary => "convert an IEEE Common Format case (or a network file) to a network file";
-    public override string Usage => "study convert IN OUT";
-    protected override IEnumerable<string> Flags => [];
+    protected override void Declare(Declaration d) => d
+        .Positional("IN", "the file to convert: an IEEE Common Format case or a network file of any version")
+        .Positional("OUT", "the network file to write (the current version), e.g. case.study.json");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string input = args.Positional(0, "IN (the file to convert)");
         string output = args.Positional(1, "OUT (the network file to write, e.g. case.study.json)");
-        args.ExpectPositionals(2);
         if (Path.GetFullPath(input) == Path.GetFullPath(output))
             throw new UsageException("IN and OUT are the same file: choose another OUT so the original is kept");
         Network network = NetworkCheck.Read(input).Network;

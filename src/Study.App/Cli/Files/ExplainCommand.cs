@@ -7,19 +7,19 @@ using Study.Core.Units;
 
 namespace Study.App.Cli.Files;
 
-public sealed class ExplainCommand : Command
+public sealed class ExplainCommand : CliCommand
 {
     public override string Name => "explain";
     public override string Summary => "show how one element's data becomes per-unit values on the system base, step by step";
-    public override string Usage => "study explain FILE ID [--scenario NAME]";
-    protected override IEnumerable<string> ValueOptions => ["scenario"];
-    protected override IEnumerable<string> Flags => [];
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Positional("ID", "the element to explain")
+        .Value("scenario", "NAME", "scale loads as the named scenario does (default: loads as entered)");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
         string id = args.Positional(1, "ID (the element to explain)");
-        args.ExpectPositionals(2);
         NetworkCheck read = NetworkCheck.Read(path);
         ElementExplanation e = read.Explain(id, args.Value("scenario"));
         context.Out.Write(Render(read.Network, e));

@@ -8,27 +8,22 @@ using Study.Core.Studies;
 
 namespace Study.App.Cli.Outages;
 
-public sealed class OutagesCommand : Command
+public sealed class OutagesCommand : CliCommand
 {
     public override string Name => "outages";
     public override string Summary => "take each line and transformer out in turn and rank the outages by what they break";
-    public override string Usage =>
-        "study outages FILE [--scenario NAME | --all-scenarios] [--elements ID ...] [--json] [--csv DIR] [--markdown FILE]";
-    public override IReadOnlyList<string> OptionHelp =>
-    [
-        "--scenario NAME    one scenario; --all-scenarios (the default when the network has scenarios) screens each",
-        "--elements ID ...  take out only these lines and transformers (default: every one in service)",
-        "--json             machine-readable result (an array of scenarios when there are several)",
-        "--csv DIR          write outages.csv and new-violations.csv into DIR",
-        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
-    ];
-    protected override IEnumerable<string> ValueOptions => ["scenario", "elements*", "csv", "markdown"];
-    protected override IEnumerable<string> Flags => ["json", "all-scenarios"];
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Value("scenario", "NAME", "one scenario (default: every scenario of the network)")
+        .Flag("all-scenarios", "screen every scenario of the network (the default when it has scenarios)")
+        .Many("elements", "ID", "take out only these lines and transformers (default: every one in service)")
+        .Flag("json", "machine-readable result (an array of scenarios when there are several)")
+        .Value("csv", "DIR", "write outages.csv and new-violations.csv into DIR")
+        .Value("markdown", "FILE", "write the report as Markdown, with the inputs, to attach to a study note");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
-        args.ExpectPositionals(1);
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
             throw new UsageException("give --scenario NAME or --all-scenarios, not both");
 

@@ -8,17 +8,18 @@ using Study.App.Reports;
 
 namespace Study.App.Cli.Scale;
 
-public sealed class BenchCommand : Command
+public sealed class BenchCommand : CliCommand
 {
     public override string Name => "bench";
     public override string Summary => "time generation, model build, load flow and the all-bus 3ph fault scan on synthetic networks of several sizes";
-    public override string Usage => "study bench [--sizes 1000,10000,100000] [--seed S] [--repeat N] [--no-faults]";
-    protected override IEnumerable<string> ValueOptions => ["sizes", "seed", "repeat"];
-    protected override IEnumerable<string> Flags => ["no-faults"];
+    protected override void Declare(Declaration d) => d
+        .Many("sizes", "N", "bus counts of the generated networks (default 1000,10000,100000)")
+        .Value("seed", "S", "seed of the generator (default 1)")
+        .Value("repeat", "N", "solves per size, the best one reported (default 3)")
+        .Flag("no-faults", "skip the all-bus three-phase fault scan");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
-        args.ExpectPositionals(0);
         var sizes = args.Values("sizes").Select(s => int.TryParse(s, out int v) && v >= 2 ? v
             : throw new UsageException($"--sizes takes whole numbers of buses, got '{s}'")).ToList();
         if (sizes.Count == 0) sizes = [1000, 10000, 100000];

@@ -5,19 +5,17 @@ using Study.Core.Synthetic;
 
 namespace Study.App.Cli.Scale;
 
-public sealed class GenerateCommand : Command
+public sealed class GenerateCommand : CliCommand
 {
     public override string Name => "generate";
     public override string Summary => "write a synthetic meshed transmission-like network that solves from flat start";
-    public override string Usage => "study generate --buses N [--seed S] -o FILE";
-    protected override IEnumerable<string> ValueOptions => ["buses", "seed", "output"];
-    protected override IEnumerable<string> Flags => [];
-
-    protected override IReadOnlyDictionary<string, string> ShortForms { get; } = new Dictionary<string, string> { ["-o"] = "--output" };
+    protected override void Declare(Declaration d) => d
+        .Value("buses", "N", "number of buses (required)")
+        .Value("seed", "S", "seed of the generator (default 1)")
+        .Value("output", "FILE", "the network file to write (required)", "-o");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
-        args.ExpectPositionals(0);
         int buses = args.Integer("buses") ?? throw new UsageException("--buses N is required");
         if (buses < 2 || buses > 2_000_000) throw new UsageException("--buses must be between 2 and 2,000,000");
         string output = args.Value("output") ?? throw new UsageException("-o FILE (where to write the network) is required");

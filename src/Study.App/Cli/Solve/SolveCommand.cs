@@ -7,32 +7,26 @@ using Study.Core.Model;
 
 namespace Study.App.Cli.Solve;
 
-public sealed class SolveCommand : Command
+public sealed class SolveCommand : CliCommand
 {
     public override string Name => "solve";
     public override string Summary => "solve the load flow (Newton-Raphson) and report voltages, flows, losses and violations";
-    public override string Usage =>
-        "study solve FILE [--scenario NAME] [--json] [--csv DIR] [--markdown FILE] [--tolerance X] [--max-iterations N] [--no-q-limits] [--fixed-taps] [--export-jacobian FILE] [--timings]";
-    public override IReadOnlyList<string> OptionHelp =>
-    [
-        "--scenario NAME         scale loads as the named scenario does (default: loads as entered)",
-        "--json                  machine-readable result",
-        "--csv DIR               write buses.csv, branches.csv, taps.csv, violations.csv into DIR",
-        "--markdown FILE         write the report as Markdown, with the inputs, to attach to a study note",
-        "--tolerance X           largest P/Q mismatch accepted, pu (default 1e-8)",
-        "--max-iterations N      Newton-Raphson iterations per solve (default 30)",
-        "--no-q-limits           do not switch PV buses to PQ at their reactive limits",
-        "--fixed-taps            hold on-load tap changers at the positions in the file",
-        "--export-jacobian FILE  write the Jacobian of the last iteration (Matrix Market)",
-        "--timings               report the time of each stage (read, validate, build, solve, report)",
-    ];
-    protected override IEnumerable<string> ValueOptions => ["scenario", "csv", "markdown", "tolerance", "max-iterations", "export-jacobian"];
-    protected override IEnumerable<string> Flags => ["json", "no-q-limits", "fixed-taps", "timings"];
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Value("scenario", "NAME", "scale loads as the named scenario does (default: loads as entered)")
+        .Flag("json", "machine-readable result")
+        .Value("csv", "DIR", "write buses.csv, branches.csv, taps.csv, violations.csv into DIR")
+        .Value("markdown", "FILE", "write the report as Markdown, with the inputs, to attach to a study note")
+        .Value("tolerance", "X", "largest P/Q mismatch accepted, pu (default 1e-8; 1e-13 to 1e-3)")
+        .Value("max-iterations", "N", "Newton-Raphson iterations per solve (default 30)")
+        .Flag("no-q-limits", "do not switch PV buses to PQ at their reactive limits")
+        .Flag("fixed-taps", "hold on-load tap changers at the positions in the file")
+        .Value("export-jacobian", "FILE", "write the Jacobian of the last iteration (Matrix Market)")
+        .Flag("timings", "report the time of each stage (read, validate, build, solve, report)");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
-        args.ExpectPositionals(1);
         var options = new LoadFlowOptions
         {
             TolerancePu = args.Number("tolerance") ?? LoadFlowOptions.Default.TolerancePu,

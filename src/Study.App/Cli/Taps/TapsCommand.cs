@@ -8,30 +8,25 @@ using Study.Core.Studies;
 
 namespace Study.App.Cli.Taps;
 
-public sealed class TapsCommand : Command
+public sealed class TapsCommand : CliCommand
 {
     public override string Name => "taps";
     public override string Summary => "solve every tap position of one transformer and recommend the positions that hold the band";
-    public override string Usage =>
-        "study taps FILE --transformer ID [--watch BUS ...] [--band LO,HI] [--scenario NAME | --all-scenarios] [--hold-other-taps] [--json] [--csv DIR] [--markdown FILE]";
-    public override IReadOnlyList<string> OptionHelp =>
-    [
-        "--transformer ID   the transformer whose tap positions are studied",
-        "--watch BUS ...    buses that must stay in band (default: the buses the transformer feeds at its lv voltage)",
-        "--band LO,HI       the band in pu, e.g. 0.97,1.03 (default: each watched bus's vMin..vMax)",
-        "--scenario NAME    one scenario; --all-scenarios (the default when the network has scenarios) solves each",
-        "--hold-other-taps  hold other on-load tap changers at their file positions (default: they regulate)",
-        "--json             machine-readable result",
-        "--csv DIR          write positions.csv and recommended.csv into DIR",
-        "--markdown FILE    write the report as Markdown, with the inputs, to attach to a study note",
-    ];
-    protected override IEnumerable<string> ValueOptions => ["transformer", "watch*", "band", "scenario", "csv", "markdown"];
-    protected override IEnumerable<string> Flags => ["json", "all-scenarios", "hold-other-taps"];
+    protected override void Declare(Declaration d) => d
+        .Positional("FILE", "a network file or IEEE Common Format case")
+        .Value("transformer", "ID", "the transformer whose tap positions are studied (required)")
+        .Many("watch", "BUS", "buses that must stay in band (default: the buses the transformer feeds at its lv voltage)")
+        .Value("band", "LO,HI", "the band in pu, e.g. 0.97,1.03 (default: each watched bus's vMin..vMax)")
+        .Value("scenario", "NAME", "one scenario (default: every scenario of the network)")
+        .Flag("all-scenarios", "solve every scenario of the network (the default when it has scenarios)")
+        .Flag("hold-other-taps", "hold other on-load tap changers at their file positions (default: they regulate)")
+        .Flag("json", "machine-readable result")
+        .Value("csv", "DIR", "write positions.csv and recommended.csv into DIR")
+        .Value("markdown", "FILE", "write the report as Markdown, with the inputs, to attach to a study note");
 
     protected override int Execute(Arguments args, CommandContext context)
     {
         string path = args.Positional(0, "FILE (a network file or IEEE Common Format case)");
-        args.ExpectPositionals(1);
         string transformer = args.Value("transformer") ?? throw new UsageException("--transformer ID is required");
         var band = args.Pair("band");
         if (args.Has("all-scenarios") && args.Value("scenario") is not null)
