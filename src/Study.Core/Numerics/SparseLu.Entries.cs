@@ -18,6 +18,7 @@ public sealed partial class SparseLu<T>
     private int reachStamp;
     private int[] reachL = [], reachU = [], reachStack = [];
     private T[] dense = [];
+    private T[] rowDense = [];    // U⁻ᵀ·e accumulator, all zero between calls (Solve's work vector is not)
 
     /// <summary>
     /// values[t] = (A⁻¹)(rows[t], column) for the current factorisation. Costs the reaches of column
@@ -29,6 +30,11 @@ public sealed partial class SparseLu<T>
         if (!factorised) throw new InvalidOperationException("InverseEntries needs a successful Factor or Refactor first.");
         ArgumentOutOfRangeException.ThrowIfGreaterThanOrEqual((uint)column, (uint)n, nameof(column));
         if (values.Length < rows.Length) throw new ArgumentException("values must hold one entry per row.", nameof(values));
+        // Checked before any work: the accumulators must be left all zero.
+        foreach (int r in rows)
+        {
+            if ((uint)r >= (uint)n) throw new ArgumentOutOfRangeException(nameof(rows), r, $"a row must lie in [0, {n}).");
+        }
         PrepareEntries();
         int[] lpl = lp, lil = li;
         T[] lxl = lx, y = dense;
@@ -46,11 +52,10 @@ public sealed partial class SparseLu<T>
 
         // For each row r: w = U⁻ᵀ·e_qinv[r] over its reach in Uᵀ, then the dot product w·y.
         int[] utpl = utp, util = uti;
-        T[] utxl = utx, diag = udiag, w = work;
+        T[] utxl = utx, diag = udiag, w = rowDense;
         for (int t = 0; t < rows.Length; t++)
         {
             int r = rows[t];
-            if ((uint)r >= (uint)n) throw new ArgumentOutOfRangeException(nameof(rows), r, $"a row must lie in [0, {n}).");
             int topU = ReachFrom(qinv[r], utpl, util, reachU);
             w[reachU[topU]] = T.One;
             T sum = T.Zero;
@@ -81,6 +86,7 @@ public sealed partial class SparseLu<T>
         {
             udiag = new T[n];
             dense = new T[n];
+            rowDense = new T[n];
             reachMark = new int[n];
             reachL = new int[n];
             reachU = new int[n];
