@@ -32,12 +32,10 @@ public static class BlockOrdering
     {
         int n = a.Cols;
         int[] ap = a.ColPtr, ai = a.RowIdx;
-        var cp = new int[blocks + 1];
-        for (int j = 0; j < n; j++) cp[blockOf[j] + 1] += ap[j + 1] - ap[j];
-        for (int b = 0; b < blocks; b++) cp[b + 1] += cp[b];
-        var ci = new int[cp[blocks]];
         var next = new int[blocks];
-        Array.Copy(cp, next, blocks);
+        for (int j = 0; j < n; j++) next[blockOf[j]] += ap[j + 1] - ap[j];
+        var cp = new int[blocks + 1];
+        var ci = new int[CompressedColumn.CumulativeSum(cp, next)];
         for (int j = 0; j < n; j++)
         {
             int bj = blockOf[j];
@@ -52,11 +50,11 @@ public static class BlockOrdering
         int n = blockOf.Length;
         var rank = new int[blocks];
         for (int k = 0; k < blocks; k++) rank[blockOrder[k]] = k;
-        var start = new int[blocks + 1];
-        for (int r = 0; r < n; r++) start[rank[blockOf[r]] + 1]++;
-        for (int k = 0; k < blocks; k++) start[k + 1] += start[k];
+        var next = new int[blocks];
+        for (int r = 0; r < n; r++) next[rank[blockOf[r]]]++;
+        CompressedColumn.CumulativeSum(new int[blocks + 1], next);
         var q = new int[n];
-        for (int r = 0; r < n; r++) q[start[rank[blockOf[r]]]++] = r;
+        for (int r = 0; r < n; r++) q[next[rank[blockOf[r]]]++] = r;
         return q;
     }
 }

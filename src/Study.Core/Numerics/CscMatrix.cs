@@ -68,25 +68,11 @@ public sealed class CscMatrix<T> where T : INumberBase<T>
     /// <summary>Aᵀ (plain transpose, no conjugation), rows sorted in each column (Davis 2006, §2.5, cs_transpose).</summary>
     public CscMatrix<T> Transpose()
     {
-        int[] ap = ColPtr, ai = RowIdx;
-        T[] ax = Values;
         int nnz = NonZeros;
         var cp = new int[Rows + 1];
         var ci = new int[nnz];
         var cx = new T[nnz];
-        for (int p = 0; p < nnz; p++) cp[ai[p] + 1]++;
-        for (int i = 0; i < Rows; i++) cp[i + 1] += cp[i];
-        var next = new int[Rows];
-        Array.Copy(cp, next, Rows);
-        for (int j = 0; j < Cols; j++)
-        {
-            for (int p = ap[j]; p < ap[j + 1]; p++)
-            {
-                int q = next[ai[p]]++;
-                ci[q] = j;
-                cx[q] = ax[p];
-            }
-        }
+        CompressedColumn.Transpose<T>(ColPtr, RowIdx.AsSpan(0, nnz), Values.AsSpan(0, nnz), cp, ci, cx, new int[Rows]);
         return new CscMatrix<T>(Cols, Rows, cp, ci, cx);
     }
 

@@ -1,5 +1,9 @@
-// Elimination tree of a symmetric pattern and its postorder: the skeleton that symbolic analysis
-// counts fill on (Davis 2006, §4.1 cs_etree, §4.3 cs_post and cs_tdfs).
+// Elimination tree of a symmetric pattern, its postorder, and the row patterns of the Cholesky
+// factor it gives: the skeleton that symbolic analysis counts fill on and the diagonal-pivot
+// factorisation takes its pattern from (Davis 2006, §4.1 cs_etree, §4.2 cs_ereach, §4.3 cs_post
+// and cs_tdfs).
+using System.Runtime.CompilerServices;
+
 namespace Study.Core.Numerics;
 
 /// <summary>Elimination tree routines on a symmetric pattern.</summary>
@@ -30,6 +34,37 @@ internal static class EliminationTree
             }
         }
         return parent;
+    }
+
+    /// <summary>
+    /// Pattern of row k of the Cholesky factor L, without the diagonal: the nodes on the tree paths
+    /// from each source i &lt; k up to k, written to s[top..n-1] in topological order, n = s.Length
+    /// (Davis 2006, §4.2, cs_ereach). The sources are the rows of column k (larger ones are
+    /// skipped), each renamed to rename[source] unless rename is empty. Returns top, or -1 when a
+    /// path ends at a root before reaching k: then parent is not the elimination tree of a pattern
+    /// holding those entries. marks[v] == stamp marks visited nodes, so each row needs a fresh stamp.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static int Reach(int k, ReadOnlySpan<int> sources, ReadOnlySpan<int> rename, int[] parent, int[] s, int[] marks, int stamp)
+    {
+        int top = s.Length;
+        bool renamed = !rename.IsEmpty;
+        marks[k] = stamp;
+        foreach (int source in sources)
+        {
+            int i = renamed ? rename[source] : source;
+            if (i > k) continue;
+            int len = 0;
+            while (marks[i] != stamp)
+            {
+                s[len++] = i;
+                marks[i] = stamp;
+                i = parent[i];
+                if (i < 0) return -1;
+            }
+            while (len > 0) s[--top] = s[--len]; // push the path onto the output
+        }
+        return top;
     }
 
     /// <summary>Postorder of a forest given by parent[] (Davis 2006, §4.3, cs_post).</summary>

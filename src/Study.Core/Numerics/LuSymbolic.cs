@@ -1,5 +1,6 @@
-// Symbolic analysis for sparse LU, done once per pattern: the fill-reducing column order and the
-// expected sizes of L and U (Davis 2006, §6.1 cs_sqr for LU, with the counts of §4.5).
+// Symbolic analysis for sparse LU, done once per pattern: the fill-reducing column order, the
+// elimination tree in that order, and the expected sizes of L and U (Davis 2006, §6.1 cs_sqr for
+// LU, with the tree of §4.1 and the counts of §4.5).
 using System.Numerics;
 
 namespace Study.Core.Numerics;
@@ -7,11 +8,12 @@ namespace Study.Core.Numerics;
 /// <summary>Pattern-only analysis of a square matrix, shared by every numeric factorisation of that pattern.</summary>
 public sealed class LuSymbolic
 {
-    private LuSymbolic(int size, ColumnOrdering ordering, int[] columnOrder, long lowerCount, long upperCount)
+    private LuSymbolic(int size, ColumnOrdering ordering, int[] columnOrder, int[] parent, long lowerCount, long upperCount)
     {
         Size = size;
         Ordering = ordering;
         ColumnOrder = columnOrder;
+        Parent = parent;
         EstimatedNonZerosL = lowerCount;
         EstimatedNonZerosU = upperCount;
     }
@@ -23,6 +25,13 @@ public sealed class LuSymbolic
 
     /// <summary>q: column k of the factors is column q[k] of A; the row order starts as the same permutation.</summary>
     public int[] ColumnOrder { get; }
+
+    /// <summary>
+    /// Elimination tree of Q(A + Aᵀ)Qᵀ: parent[k] of node k (column k of the factors), -1 for a root.
+    /// With diagonal pivots on a structurally symmetric matrix, row k of L is the union of the tree
+    /// paths from the entries above the diagonal of column k up to k (Davis 2006, §4.1-4.2).
+    /// </summary>
+    internal int[] Parent { get; }
 
     /// <summary>
     /// nnz(L) with its unit diagonal, exact when every pivot stays on the diagonal of a structurally
@@ -82,6 +91,6 @@ public sealed class LuSymbolic
         var counts = ColumnCounts.Of(permuted, parent, post);
         long total = 0;
         for (int k = 0; k < n; k++) total += counts[k];
-        return new LuSymbolic(n, ordering, q, total, total);
+        return new LuSymbolic(n, ordering, q, parent, total, total);
     }
 }

@@ -1,6 +1,6 @@
 // First factorisation of a structurally symmetric matrix when every pivot can stay on the diagonal.
 // Then L is the Cholesky pattern of C = Q·A·Qᵀ and U is its transpose plus the diagonal, both found
-// from the elimination tree with no depth-first search over L (Davis 2006, §4.1 cs_etree, §4.2
+// from the analysis's elimination tree with no depth-first search over L (Davis 2006, §4.2
 // cs_ereach); the numbers are computed by the values-only loop with cs_lu's pivot test. If a
 // diagonal pivot fails that test, the caller falls back to the pivoting factorisation.
 using System.Runtime.CompilerServices;
@@ -9,16 +9,11 @@ namespace Study.Core.Numerics;
 
 public sealed partial class SparseLu<T>
 {
-    private int[] parent = [];     // elimination tree of C, -1 for a root
-    private int[] transposeColPtr = [];
-    private int[] transposeRowIdx = [];
-
     // Factorises a with diagonal pivots when a is structurally symmetric with a full diagonal and
     // each diagonal is within PivotTolerance of the largest candidate in its column.
     private bool TryFactorOnDiagonal(CscMatrix<T> a)
     {
-        if (!StructurallySymmetric(a)) return false;
-        DiagonalPattern(a);
+        if (!StructurallySymmetric(a) || !DiagonalPattern(a)) return false;
         for (int i = 0; i < n; i++) pinv[i] = qinv[i];
         return RefactorValues(a, Options.PivotTolerance);
     }
@@ -27,122 +22,72 @@ public sealed partial class SparseLu<T>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private bool StructurallySymmetric(CscMatrix<T> a)
     {
-        int[] ap = a.ColPtr, ai = a.RowIdx, markl = mark;
+        int[] ap = a.ColPtr, ai = a.RowIdx, marks = ws.Marks;
         int nnz = ap[n];
-        if (transposeColPtr.Length != n + 1) transposeColPtr = new int[n + 1];
-        if (transposeRowIdx.Length < nnz) transposeRowIdx = new int[nnz];
-        int[] tp = transposeColPtr, ti = transposeRowIdx, next = pstack;
-        Array.Clear(tp);
-        for (int p = 0; p < nnz; p++) tp[ai[p] + 1]++;
+        int[] tp = ws.Pointers, ti = ws.PatternOfSize(nnz);
+        CompressedColumn.Transpose(ap, ai.AsSpan(0, nnz), tp, ti, ws.Stack);
         for (int j = 0; j < n; j++)
         {
-            tp[j + 1] += tp[j];
             if (tp[j + 1] - tp[j] != ap[j + 1] - ap[j]) return false;
         }
-        Array.Copy(tp, next, n);
         for (int j = 0; j < n; j++)
         {
-            for (int p = ap[j]; p < ap[j + 1]; p++) ti[next[ai[p]]++] = j;
-        }
-        Array.Clear(markl);
-        for (int j = 0; j < n; j++)
-        {
-            int stamp = j + 1;
-            for (int p = ap[j]; p < ap[j + 1]; p++) markl[ai[p]] = stamp;
-            if (markl[j] != stamp) return false;
+            int stamp = ws.NewStamp();
+            for (int p = ap[j]; p < ap[j + 1]; p++) marks[ai[p]] = stamp;
+            if (marks[j] != stamp) return false;
             for (int p = tp[j]; p < tp[j + 1]; p++)
             {
-                if (markl[ti[p]] != stamp) return false;
+                if (marks[ti[p]] != stamp) return false;
             }
         }
         return true;
     }
 
-    // lp/li and up/ui for diagonal pivots in the symbolic order: row k of L (= column k of U) is the
-    // reach of C(0:k-1, k) in the elimination tree; L's columns are U's rows, both sorted ascending.
+    // lp/li and up/ui for diagonal pivots in the symbolic order. Row k of L (= column k of U above
+    // the diagonal) is the row subtree of k in the elimination tree; transposing that pattern gives
+    // L and transposing L back sorts U's columns, which the solves and refactorisations then read in
+    // increasing order. False when the analysis's tree does not hold a's pattern (a matrix other
+    // than the one analysed): the pivoting factorisation then finds the pattern by itself.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void DiagonalPattern(CscMatrix<T> a)
+    private bool DiagonalPattern(CscMatrix<T> a)
     {
-        int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder, qinvl = qinv;
-        if (parent.Length != n) parent = new int[n];
-        int[] parentl = parent, ancestor = pstack, s = xi, markl = mark;
-        int[] lpl = lp, upl = up;
+        int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder, parent = Symbolic.Parent;
+        int[] strictPtr = ws.Pointers, s = ws.Nodes, marks = ws.Marks;
 
-        // Elimination tree of C with path compression (Davis 2006, §4.1, cs_etree).
-        for (int k = 0; k < n; k++)
-        {
-            parentl[k] = -1;
-            ancestor[k] = -1;
-            int col = q[k];
-            for (int p = ap[col]; p < ap[col + 1]; p++)
-            {
-                int i = qinvl[ai[p]];
-                while (i != -1 && i < k)
-                {
-                    int inext = ancestor[i];
-                    ancestor[i] = k;
-                    if (inext == -1) parentl[i] = k;
-                    i = inext;
-                }
-            }
-        }
-
-        // U(:,k) = the row subtree of k (Davis 2006, §4.2, cs_ereach), diagonal last.
-        Array.Fill(markl, -1);
+        // U without its diagonal: column k is row k of L, in topological order (cs_ereach).
         int unz = 0;
         for (int k = 0; k < n; k++)
         {
-            upl[k] = unz;
-            markl[k] = k;
-            int top = n, col = q[k];
-            for (int p = ap[col]; p < ap[col + 1]; p++)
-            {
-                int i = qinvl[ai[p]];
-                if (i > k) continue;
-                int len = 0;
-                for (; markl[i] != k; i = parentl[i])
-                {
-                    s[len++] = i;
-                    markl[i] = k;
-                }
-                while (len > 0) s[--top] = s[--len];
-            }
+            strictPtr[k] = unz;
+            int col = q[k];
+            int top = EliminationTree.Reach(k, ai.AsSpan(ap[col], ap[col + 1] - ap[col]), qinv, parent, s, marks, ws.NewStamp());
+            if (top < 0) return false;
             int count = n - top;
-            if (unz + count + 1 > ui.Length) Grow(ref ui, ref ux, unz + count + 1);
-            int[] uil = ui;
-            Array.Copy(s, top, uil, unz, count);
+            if (unz + count > ui.Length) Grow(ref ui, ref ux, unz + count);
+            Array.Copy(s, top, ui, unz, count);
             unz += count;
-            uil[unz++] = k;
         }
-        upl[n] = unz;
+        strictPtr[n] = unz;
 
-        // L by rows of U: column j of L lists the k > j with U(j,k) != 0, in increasing k.
-        int[] next = ancestor, uiu = ui;
-        Array.Clear(next);
-        for (int k = 0; k < n; k++)
-        {
-            for (int p = upl[k]; p < upl[k + 1] - 1; p++) next[uiu[p]]++;
-        }
-        int lnz = 0;
-        for (int j = 0; j < n; j++)
-        {
-            lpl[j] = lnz;
-            lnz += next[j];
-            next[j] = lpl[j];
-        }
-        lpl[n] = lnz;
-        if (lnz > li.Length) Grow(ref li, ref lx, lnz);
-        int[] lil = li;
-        for (int k = 0; k < n; k++)
-        {
-            for (int p = upl[k]; p < upl[k + 1] - 1; p++) lil[next[uiu[p]]++] = k;
-        }
+        if (unz > li.Length) Grow(ref li, ref lx, unz);
+        CompressedColumn.Transpose(strictPtr, ui, lp, li, ws.Stack);
+        CompressedColumn.Transpose(lp, li, strictPtr, ui, ws.Stack);
+        if (unz + n > ui.Length) Grow(ref ui, ref ux, unz + n);
+        DiagonalLast(strictPtr, ui, up);
+        return true;
+    }
 
-        // U again as the transpose of L, now with each column's rows in increasing order.
-        for (int k = 0; k < n; k++) next[k] = upl[k];
-        for (int j = 0; j < n; j++)
+    // U's columns from its strictly upper part (column pointers strictPtr, rows in ui) by adding
+    // the diagonal last in each column, moving the columns up in place from the last one down.
+    private void DiagonalLast(int[] strictPtr, int[] uil, int[] upl)
+    {
+        upl[n] = strictPtr[n] + n;
+        for (int k = n - 1; k >= 0; k--)
         {
-            for (int p = lpl[j]; p < lpl[j + 1]; p++) uiu[next[lil[p]]++] = j;
+            int start = strictPtr[k], count = strictPtr[k + 1] - start;
+            upl[k] = start + k;
+            uil[upl[k] + count] = k;
+            Array.Copy(uil, start, uil, upl[k], count);
         }
     }
 }

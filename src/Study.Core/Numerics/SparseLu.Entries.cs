@@ -8,16 +8,10 @@ namespace Study.Core.Numerics;
 
 public sealed partial class SparseLu<T>
 {
-    private int[] utp = [];       // Uᵀ by columns (U by rows), strictly above the diagonal
+    private int[] utp = [];       // Uᵀ by columns (U by rows), diagonal first in each column
     private int[] uti = [];
     private T[] utx = [];
-    private T[] udiag = [];
     private int entriesBuiltFor = -1;  // factorisation count the Uᵀ copy belongs to
-    private int factorCount;
-    private int[] reachMark = [];
-    private int reachStamp;
-    private int[] reachL = [], reachU = [], reachStack = [];
-    private T[] dense = [];
 
     /// <summary>
     /// values[t] = (A⁻¹)(rows[t], column) for the current factorisation. Costs the reaches of column
@@ -29,13 +23,20 @@ public sealed partial class SparseLu<T>
         if (!factorised) throw new InvalidOperationException("InverseEntries needs a successful Factor or Refactor first.");
         ArgumentOutOfRangeException.ThrowIfGreaterThanOrEqual((uint)column, (uint)n, nameof(column));
         if (values.Length < rows.Length) throw new ArgumentException("values must hold one entry per row.", nameof(values));
+        // Checked before any work: the accumulators must be left all zero.
+        foreach (int r in rows)
+        {
+            if ((uint)r >= (uint)n) throw new ArgumentOutOfRangeException(nameof(rows), r, $"a row must lie in [0, {n}).");
+        }
         PrepareEntries();
-        int[] lpl = lp, lil = li;
-        T[] lxl = lx, y = dense;
+        int[] lpl = lp, lil = li, utpl = utp, util = uti;
+        T[] lxl = lx, utxl = utx, y = ws.X, w = ws.W;
+        int[] reachL = ws.Nodes, reachU = ws.SecondNodes, stack = ws.Stack, marks = ws.Marks;
 
         // y = L⁻¹·e_pinv[column] over its reach, in topological order (unit diagonal).
-        int topL = ReachFrom(pinv[column], lpl, lil, reachL);
-        y[reachL[topL]] = T.One;
+        int start = pinv[column];
+        int topL = Reach.Of(new ColumnGraph(lpl, lil), new ReadOnlySpan<int>(in start), default, reachL, stack, marks, ws.NewStamp());
+        y[start] = T.One;
         for (int px = topL; px < n; px++)
         {
             int j = reachL[px];
@@ -45,105 +46,41 @@ public sealed partial class SparseLu<T>
         }
 
         // For each row r: w = U⁻ᵀ·e_qinv[r] over its reach in Uᵀ, then the dot product w·y.
-        int[] utpl = utp, util = uti;
-        T[] utxl = utx, diag = udiag, w = work;
+        var graphOfUt = new ColumnGraph(utpl, util);
         for (int t = 0; t < rows.Length; t++)
         {
-            int r = rows[t];
-            if ((uint)r >= (uint)n) throw new ArgumentOutOfRangeException(nameof(rows), r, $"a row must lie in [0, {n}).");
-            int topU = ReachFrom(qinv[r], utpl, util, reachU);
-            w[reachU[topU]] = T.One;
+            int node = qinv[rows[t]];
+            int topU = Reach.Of(graphOfUt, new ReadOnlySpan<int>(in node), default, reachU, stack, marks, ws.NewStamp());
+            w[node] = T.One;
             T sum = T.Zero;
             for (int px = topU; px < n; px++)
             {
                 int j = reachU[px];
-                T wj = w[j] / diag[j];
+                int pd = utpl[j];
+                T wj = w[j] / utxl[pd];
                 w[j] = T.Zero;
                 if (T.IsZero(wj)) continue;
                 sum += wj * y[j];
-                for (int p = utpl[j]; p < utpl[j + 1]; p++) w[util[p]] -= utxl[p] * wj;
+                for (int p = pd + 1; p < utpl[j + 1]; p++) w[util[p]] -= utxl[p] * wj;
             }
             values[t] = sum;
         }
         for (int px = topL; px < n; px++) y[reachL[px]] = T.Zero;
     }
 
-    // Uᵀ (U by rows) without the diagonal, kept apart, built once per factorisation (Davis 2006, §2.5, cs_transpose).
+    // Uᵀ (U by rows), built once per factorisation. U is upper triangular, so the diagonal lands
+    // first in each column of Uᵀ (Davis 2006, §2.5, cs_transpose).
     private void PrepareEntries()
     {
         if (entriesBuiltFor == factorCount) return;
-        int[] upl = up, uil = ui;
-        T[] uxl = ux;
-        int strict = upl[n] - n;
+        int unz = up[n];
         if (utp.Length != n + 1) utp = new int[n + 1];
-        if (uti.Length < strict) { uti = new int[strict]; utx = new T[strict]; }
-        if (udiag.Length != n)
+        if (uti.Length < unz)
         {
-            udiag = new T[n];
-            dense = new T[n];
-            reachMark = new int[n];
-            reachL = new int[n];
-            reachU = new int[n];
-            reachStack = new int[n];
+            uti = new int[unz];
+            utx = new T[unz];
         }
-        int[] count = utp;
-        Array.Clear(count);
-        for (int j = 0; j < n; j++)
-            for (int p = upl[j]; p < upl[j + 1] - 1; p++) count[uil[p] + 1]++;
-        for (int i = 0; i < n; i++) count[i + 1] += count[i];
-        int[] next = reachStack;
-        Array.Copy(count, next, n);
-        for (int j = 0; j < n; j++)
-        {
-            int pd = upl[j + 1] - 1;
-            for (int p = upl[j]; p < pd; p++)
-            {
-                int q = next[uil[p]]++;
-                uti[q] = j;
-                utx[q] = uxl[p];
-            }
-            udiag[j] = uxl[pd];
-        }
+        CompressedColumn.Transpose<T>(up, ui.AsSpan(0, unz), ux.AsSpan(0, unz), utp, uti, utx, ws.Stack);
         entriesBuiltFor = factorCount;
-    }
-
-    // xi[top..n-1] = nodes reachable from start in the graph (gp, gi), in topological order
-    // (Davis 2006, §3.2, cs_dfs, non-recursive; the stack grows from the front of reachStack).
-    private int ReachFrom(int start, int[] gp, int[] gi, int[] xi)
-    {
-        if (++reachStamp == int.MaxValue)
-        {
-            Array.Clear(reachMark);
-            reachStamp = 1;
-        }
-        int stamp = reachStamp;
-        int[] markl = reachMark, stack = reachStack, pos = pstack;
-        int top = n, head = 0;
-        stack[0] = start;
-        while (head >= 0)
-        {
-            int j = stack[head];
-            if (markl[j] != stamp)
-            {
-                markl[j] = stamp;
-                pos[head] = gp[j];
-            }
-            bool done = true;
-            for (int p = pos[head]; p < gp[j + 1]; p++)
-            {
-                int i = gi[p];
-                if (markl[i] == stamp) continue;
-                pos[head] = p + 1;
-                stack[++head] = i;
-                done = false;
-                break;
-            }
-            if (done)
-            {
-                head--;
-                xi[--top] = j;
-            }
-        }
-        return top;
     }
 }

@@ -1,6 +1,6 @@
 // Left-looking LU with threshold partial pivoting (Gilbert and Peierls 1988; Davis 2006, §6.3,
 // cs_lu): column k of L and U comes from one sparse triangular solve x = L \ A(:,q[k]) whose
-// nonzero pattern is found first by depth-first search (Davis 2006, §3.2, cs_reach, cs_dfs).
+// nonzero pattern is found first by depth-first search (Reach; Davis 2006, §3.2, cs_reach).
 // The search runs on a symmetrically pruned graph of L (Eisenstat and Liu, SIAM J. Matrix Anal.
 // Appl. 13(1), 1992), which finds the same reach while skipping edges another path already covers.
 using System.Runtime.CompilerServices;
@@ -18,20 +18,25 @@ public sealed partial class SparseLu<T>
     {
         int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder;
         T[] ax = a.Values;
-        int[] lpl = lp, upl = up, pinvl = rowPivot, qinvl = qinv, xil = xi;
+        int[] lpl = lp, upl = up, qinvl = qinv;
         int[] lil = li, uil = ui;
-        T[] lxl = lx, uxl = ux, xl = x;
+        T[] lxl = lx, uxl = ux;
+        int[] pinvl = ws.RowPivot, searchEnd = ws.SearchEnd, xi = ws.Nodes, stack = ws.Stack, marks = ws.Marks;
+        T[] xl = ws.X;
         double tol = Options.PivotTolerance, singularTol = Options.SingularPivotTolerance;
         Array.Fill(pinvl, -1);
-        Array.Fill(lpend, -1);
-        Array.Clear(mark);
         int lnz = 0, unz = 0;
         for (int k = 0; k < n; k++)
         {
             lpl[k] = lnz;
             upl[k] = unz;
             int col = q[k];
-            int top = Reach(col, ap, ai, lil, k + 1);
+
+            // The pattern of x = L \ A(:,col): rows reachable from A(:,col) in the graph of L, whose
+            // node j (a row in symbolic order) leads to the rows of L's column pinvl[j] once j is
+            // pivotal, up to where pruning stopped that column (cs_reach).
+            var graphOfL = new ColumnGraph(lpl, searchEnd, lil, pinvl);
+            int top = Reach.Of(graphOfL, ai.AsSpan(ap[col], ap[col + 1] - ap[col]), qinvl, xi, stack, marks, ws.NewStamp());
 
             // At most n - top entries go to L and U; grow (only here, never in Refactor) if needed.
             int count = n - top;
@@ -58,7 +63,7 @@ public sealed partial class SparseLu<T>
             }
             for (int px = top; px < n; px++)
             {
-                int j = xil[px];
+                int j = xi[px];
                 int jnew = pinvl[j];
                 if (jnew < 0) continue;
                 T xj = xl[j];
@@ -72,7 +77,7 @@ public sealed partial class SparseLu<T>
             double amax = -1;
             for (int px = top; px < n; px++)
             {
-                int i = xil[px];
+                int i = xi[px];
                 if (pinvl[i] < 0)
                 {
                     double t = Scalar.Magnitude(xl[i]);
@@ -90,7 +95,7 @@ public sealed partial class SparseLu<T>
             }
             if (ipiv == -1 || amax <= 0 || amax <= singularTol * columnMax)
             {
-                for (int px = top; px < n; px++) xl[xil[px]] = T.Zero;
+                for (int px = top; px < n; px++) xl[xi[px]] = T.Zero;
                 singularColumn = col;
                 return false;
             }
@@ -104,7 +109,7 @@ public sealed partial class SparseLu<T>
             T inverse = T.One / pivot;
             for (int px = top; px < n; px++)
             {
-                int i = xil[px];
+                int i = xi[px];
                 if (pinvl[i] < 0)
                 {
                     lil[lnz] = i;
@@ -112,6 +117,7 @@ public sealed partial class SparseLu<T>
                 }
                 xl[i] = T.Zero;
             }
+            searchEnd[k] = lnz;
             Prune(ipiv, upl[k], unz - 1, lil, lxl);
         }
         lpl[n] = lnz;
@@ -122,69 +128,18 @@ public sealed partial class SparseLu<T>
         return true;
     }
 
-    // xi[top..n-1] = nodes reachable from the pattern of A(:,col) in the graph of L, in topological
-    // order (Davis 2006, §3.2, cs_reach). Nodes are rows in symbolic order; a row not yet pivotal
-    // has no edges.
-    private int Reach(int col, int[] ap, int[] ai, int[] lil, int stamp)
-    {
-        int[] markl = mark, qinvl = qinv;
-        int top = n;
-        for (int p = ap[col]; p < ap[col + 1]; p++)
-        {
-            int i = qinvl[ai[p]];
-            if (markl[i] != stamp) top = DepthFirst(i, top, lil, stamp);
-        }
-        return top;
-    }
-
-    // Non-recursive DFS from node j (Davis 2006, §3.2, cs_dfs): the recursion stack grows from the
-    // front of xi while finished nodes are pushed onto its back, which never overlap.
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private int DepthFirst(int j, int top, int[] lil, int stamp)
-    {
-        int[] lpl = lp, lpendl = lpend, pinvl = rowPivot, xil = xi, stack = pstack, markl = mark;
-        int head = 0;
-        xil[0] = j;
-        while (head >= 0)
-        {
-            j = xil[head];
-            int jnew = pinvl[j];
-            if (markl[j] != stamp)
-            {
-                markl[j] = stamp;
-                stack[head] = jnew < 0 ? 0 : lpl[jnew];
-            }
-            bool done = true;
-            int p2 = jnew < 0 ? 0 : lpendl[jnew] >= 0 ? lpendl[jnew] : lpl[jnew + 1];
-            for (int p = stack[head]; p < p2; p++)
-            {
-                int i = lil[p];
-                if (markl[i] == stamp) continue;
-                stack[head] = p;
-                xil[++head] = i;
-                done = false;
-                break;
-            }
-            if (done)
-            {
-                head--;
-                xil[--top] = j;
-            }
-        }
-        return top;
-    }
-
     // Symmetric pruning after step k: for each column j of L with U(j,k) != 0 that holds the new
-    // pivot row, rows of L(:,j) not yet pivotal are reachable through that pivot row, so the DFS
-    // may stop at the pivotal ones. They are moved to the front and lpend[j] marks where they end.
+    // pivot row, rows of L(:,j) not yet pivotal are reachable through that pivot row, so the search
+    // may stop at the pivotal ones. They are moved to the front and the search end of j set after
+    // them. A column is pruned once: its search end then stands before the column's end.
     private void Prune(int pivotRow, int uStart, int uEnd, int[] lil, T[] lxl)
     {
-        int[] lpl = lp, lpendl = lpend, pinvl = rowPivot, uil = ui;
+        int[] lpl = lp, searchEnd = ws.SearchEnd, pinvl = ws.RowPivot, uil = ui;
         for (int pu = uStart; pu < uEnd; pu++)
         {
             int j = uil[pu];
-            if (lpendl[j] >= 0) continue;
             int start = lpl[j], end = lpl[j + 1];
+            if (searchEnd[j] != end) continue;
             if (Array.IndexOf(lil, pivotRow, start, end - start) < 0) continue;
             int head = start, tail = end;
             while (head < tail)
@@ -202,7 +157,7 @@ public sealed partial class SparseLu<T>
                     (lxl[head], lxl[tail]) = (lxl[tail], lxl[head]);
                 }
             }
-            lpendl[j] = tail;
+            searchEnd[j] = tail;
         }
     }
 
@@ -213,14 +168,5 @@ public sealed partial class SparseLu<T>
     {
         values = values[..rows.Length];
         for (int t = 0; t < rows.Length; t++) x[rows[t]] -= values[t] * factor;
-    }
-
-    private static void Grow(ref int[] index, ref T[] values, int needed)
-    {
-        long grown = Math.Max(needed, (long)index.Length + index.Length / 2 + 1024);
-        int size = (int)Math.Min(grown, Array.MaxLength);
-        if (size < needed) throw new OutOfMemoryException("the LU factors exceed the largest array .NET allows.");
-        Array.Resize(ref index, size);
-        Array.Resize(ref values, size);
     }
 }

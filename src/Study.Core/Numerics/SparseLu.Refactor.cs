@@ -8,16 +8,17 @@ namespace Study.Core.Numerics;
 
 public sealed partial class SparseLu<T>
 {
-    // Returns false, with the accumulator cleared, as soon as a pivot falls below
-    // tol (RefactorPivotTolerance, or PivotTolerance for a first factorisation) of the largest candidate in its column, or every candidate looks like
-    // rounding noise, so the caller can re-pivot (or report the column singular).
+    // Returns false, with the accumulator cleared, as soon as a pivot falls below tol
+    // (RefactorPivotTolerance, or PivotTolerance for a first factorisation on the diagonal) of the
+    // largest candidate in its column, or every candidate looks like rounding noise, so the caller
+    // can re-pivot (or report the column singular).
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private bool RefactorValues(CscMatrix<T> a, double tol)
     {
         int[] ap = a.ColPtr, ai = a.RowIdx, q = Symbolic.ColumnOrder;
         T[] ax = a.Values;
         int[] lpl = lp, lil = li, upl = up, uil = ui, pinvl = pinv;
-        T[] lxl = lx, uxl = ux, xl = x;
+        T[] lxl = lx, uxl = ux, xl = ws.X;
         double singularTol = Options.SingularPivotTolerance;
         for (int k = 0; k < n; k++)
         {

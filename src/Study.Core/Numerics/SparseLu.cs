@@ -1,8 +1,10 @@
 // Sparse LU of a square matrix, P·A·Q = L·U, over double (Jacobians) or Complex (admittance
 // matrices): one symbolic analysis, a full factorisation with threshold pivoting, then values-only
 // refactorisations and in-place solves that allocate nothing (Davis 2006, ch. 6 and §8.1 cs_lusol).
+// This file holds the public entry points and the factors' storage; the phases live beside it:
+// SparseLu.Diagonal (first factorisation on the diagonal), SparseLu.Factor (with pivoting),
+// SparseLu.Refactor (values only), SparseLu.Solve and SparseLu.Entries (selected entries of A⁻¹).
 using System.Numerics;
-using System.Runtime.CompilerServices;
 
 namespace Study.Core.Numerics;
 
@@ -25,18 +27,13 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
     private readonly int[] up;  // U column pointers
     private int[] ui;           // U row indices, diagonal last in each column
     private T[] ux;
-    private readonly int[] lpend;      // end of the pruned part of each L column, -1 if unpruned
     private readonly int[] pinv;       // row i of A is pivot row pinv[i]
     private readonly int[] qinv;       // column j of A is column qinv[j] of the factors
-    private readonly int[] rowPivot;   // pinv during factorisation, on rows numbered by qinv
-    private readonly T[] x;            // dense column accumulator, all zero between columns
-    private readonly int[] xi;         // reach output and DFS recursion stack
-    private readonly int[] pstack;     // DFS resume positions
-    private readonly int[] mark;       // DFS visit stamps
-    private readonly T[] work;         // solve workspace
+    private readonly LuWorkspace<T> ws;
     private int[] factoredColPtr = [];  // pattern of the matrix last factorised, for Refactor's check
     private int[] factoredRowIdx = [];
     private bool factorised;
+    private int factorCount;           // factorisations so far, to tell when the Uᵀ copy is stale
 
     public SparseLu(LuSymbolic symbolic, LuOptions? options = null)
     {
@@ -55,13 +52,7 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         pinv = new int[n];
         qinv = new int[n];
         for (int k = 0; k < n; k++) qinv[symbolic.ColumnOrder[k]] = k;
-        rowPivot = new int[n];
-        lpend = new int[n];
-        x = new T[n];
-        xi = new int[n];
-        pstack = new int[n];
-        mark = new int[n];
-        work = new T[n];
+        ws = new LuWorkspace<T>(n);
     }
 
     /// <summary>Analyses the pattern of a (ordering and fill estimate) and returns a solver ready to <c>Factor</c>.</summary>
@@ -141,67 +132,6 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         return FactorFresh(a, out singularColumn);
     }
 
-    /// <summary>Solves A·x = b in place: b holds x on return.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public void Solve(Span<T> b)
-    {
-        CheckSolve(b.Length);
-        int[] lpl = lp, lil = li, upl = up, uil = ui, q = Symbolic.ColumnOrder, pinvl = pinv;
-        T[] lxl = lx, uxl = ux, w = work;
-        for (int i = 0; i < n; i++) w[pinvl[i]] = b[i];
-        // L·y = P·b, column by column (Davis 2006, §3.1, cs_lsolve; unit diagonal implicit).
-        for (int j = 0; j < n; j++)
-        {
-            T wj = w[j];
-            if (T.IsZero(wj)) continue;
-            for (int p = lpl[j]; p < lpl[j + 1]; p++) w[lil[p]] -= lxl[p] * wj;
-        }
-        // U·z = y (Davis 2006, §3.1, cs_usolve; diagonal last in each column).
-        for (int j = n - 1; j >= 0; j--)
-        {
-            int pd = upl[j + 1] - 1;
-            T wj = w[j] / uxl[pd];
-            w[j] = wj;
-            if (T.IsZero(wj)) continue;
-            for (int p = upl[j]; p < pd; p++) w[uil[p]] -= uxl[p] * wj;
-        }
-        for (int k = 0; k < n; k++) b[q[k]] = w[k];
-    }
-
-    /// <summary>Solves A·X = B in place for a column-major block of right-hand sides, n entries each.</summary>
-    public void Solve(Span<T> block, int rightHandSides)
-    {
-        ArgumentOutOfRangeException.ThrowIfNegative(rightHandSides);
-        if (block.Length != (long)n * rightHandSides)
-            throw new ArgumentException($"the block must hold {rightHandSides} columns of {n} entries.", nameof(block));
-        for (int r = 0; r < rightHandSides; r++) Solve(block.Slice(r * n, n));
-    }
-
-    /// <summary>Solves Aᵀ·x = b in place (plain transpose, no conjugation).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public void SolveTransposed(Span<T> b)
-    {
-        CheckSolve(b.Length);
-        int[] lpl = lp, lil = li, upl = up, uil = ui, q = Symbolic.ColumnOrder, pinvl = pinv;
-        T[] lxl = lx, uxl = ux, w = work;
-        // Aᵀ = Q·Uᵀ·Lᵀ·P, so solve Uᵀ then Lᵀ on Qᵀ·b (Davis 2006, §3.1, cs_utsolve and cs_ltsolve).
-        for (int k = 0; k < n; k++) w[k] = b[q[k]];
-        for (int j = 0; j < n; j++)
-        {
-            int pd = upl[j + 1] - 1;
-            T s = w[j];
-            for (int p = upl[j]; p < pd; p++) s -= uxl[p] * w[uil[p]];
-            w[j] = s / uxl[pd];
-        }
-        for (int j = n - 1; j >= 0; j--)
-        {
-            T s = w[j];
-            for (int p = lpl[j]; p < lpl[j + 1]; p++) s -= lxl[p] * w[lil[p]];
-            w[j] = s;
-        }
-        for (int i = 0; i < n; i++) b[i] = w[pinvl[i]];
-    }
-
     private bool FactorFresh(CscMatrix<T> a, out int singularColumn)
     {
         singularColumn = -1;
@@ -229,12 +159,6 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         }
     }
 
-    private void CheckSolve(int length)
-    {
-        if (!factorised) throw new InvalidOperationException("Solve needs a successful Factor or Refactor first.");
-        if (length != n) throw new ArgumentException($"the right-hand side has {length} entries, the system {n}.");
-    }
-
     private void RememberPattern(CscMatrix<T> a)
     {
         int nnz = a.NonZeros;
@@ -250,4 +174,16 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         && a.RowIdx.AsSpan(0, a.NonZeros).SequenceEqual(factoredRowIdx);
 
     private static int Capacity(long estimate) => (int)Math.Clamp(estimate, 1, Array.MaxLength);
+
+    // Room for at least `needed` entries in a factor's index and value arrays (only the first
+    // factorisation of a pattern grows them; refactorisations reuse them as they are).
+    private static void Grow(ref int[] index, ref T[] values, int needed)
+    {
+        if (needed <= index.Length) return;
+        long grown = Math.Max(needed, (long)index.Length + index.Length / 2 + 1024);
+        int size = (int)Math.Min(grown, Array.MaxLength);
+        if (size < needed) throw new OutOfMemoryException("the LU factors exceed the largest array .NET allows.");
+        Array.Resize(ref index, size);
+        Array.Resize(ref values, size);
+    }
 }

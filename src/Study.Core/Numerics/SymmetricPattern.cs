@@ -22,21 +22,19 @@ internal sealed class SymmetricPattern
     {
         int[] ap = colPtr, ai = rowIdx;
         // Every off-diagonal a(i,j) contributes i to column j and j to column i.
-        var cp = new int[n + 1];
+        var next = new int[n];
         for (int j = 0; j < n; j++)
         {
             for (int p = ap[j]; p < ap[j + 1]; p++)
             {
                 int i = ai[p];
                 if (i == j) continue;
-                cp[i + 1]++;
-                cp[j + 1]++;
+                next[i]++;
+                next[j]++;
             }
         }
-        for (int j = 0; j < n; j++) cp[j + 1] += cp[j];
-        var ci = new int[cp[n]];
-        var next = new int[n];
-        Array.Copy(cp, next, n);
+        var cp = new int[n + 1];
+        var ci = new int[CompressedColumn.CumulativeSum(cp, next)];
         for (int j = 0; j < n; j++)
         {
             for (int p = ap[j]; p < ap[j + 1]; p++)

@@ -100,14 +100,14 @@ public sealed class TripletBuilder<T> where T : INumberBase<T>
     // Stable counting sort of slots by key[slot] in 0..range-1; input order is `within` (or 0..nz-1).
     private static int[] CountingSort(int[] key, int range, int nz, int[]? within)
     {
-        var start = new int[range + 1];
-        for (int s = 0; s < nz; s++) start[key[s] + 1]++;
-        for (int r = 0; r < range; r++) start[r + 1] += start[r];
+        var next = new int[range];
+        for (int s = 0; s < nz; s++) next[key[s]]++;
+        CompressedColumn.CumulativeSum(new int[range + 1], next);
         var sorted = new int[nz];
         for (int s = 0; s < nz; s++)
         {
             int slot = within is null ? s : within[s];
-            sorted[start[key[slot]]++] = slot;
+            sorted[next[key[slot]]++] = slot;
         }
         return sorted;
     }
