@@ -23,6 +23,7 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(List<OutagesJson>))]
 [JsonSerializable(typeof(CompareJson))]
 [JsonSerializable(typeof(FaultJson))]
+[JsonSerializable(typeof(Profile.ProfileJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson

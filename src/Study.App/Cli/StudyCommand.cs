@@ -5,6 +5,7 @@ using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
 using Study.App.Cli.Outages;
+using Study.App.Cli.Profile;
 using Study.App.Cli.Scale;
 using Study.App.Cli.Solve;
 using Study.App.Cli.Taps;
@@ -28,6 +29,7 @@ public static class StudyCommand
         new OutagesCommand(),
         new CompareCommand(),
         new FaultCommand(),
+        new ProfileCommand(),
         new ExplainCommand(),
         new GenerateCommand(),
         new BenchCommand(),

@@ -161,6 +161,30 @@ public sealed class StudyCase
         return OutageScreening.Run(scenarioModels, elements, LoadFlowOptions.Default, request.MaxParallelism, progress, cancel);
     }
 
+    /// <summary>
+    /// A load flow per step of a profile, with on-load tap changers acting between steps; the statistics of
+    /// the whole profile. The watched buses default to the buses the on-load changers regulate.
+    /// </summary>
+    /// <exception cref="InputException">The request is invalid, or a profile column or watched bus names nothing in the network.</exception>
+    public ProfileResult Profile(ProfileRequest request, LoadProfile profile, IProgress<double>? progress = null, CancellationToken cancel = default)
+    {
+        request.Validate();
+        if (profile.LoadIds is { } ids)
+            for (int k = 0; k < ids.Count; k++)
+                if (!Network.Loads.Any(l => l.Id == ids[k]))
+                    throw new InputException($"column '{ids[k]}' names no load of the network"
+                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id)) is { } near ? $": did you mean '{near}'?" : ""),
+                        profile.Source, 1, profile.LoadColumns?[k]);
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        PerUnitModel model = Model(Scenario(request.Scenario));
+        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses
+            : model.Taps.Where(t => t.RegulatedBus is not null).Select(t => model.Buses[t.RegulatedBus!.Value].Id).Distinct().ToList();
+        return ProfileStudy.Run(model, profile, watch, request.Options, progress, cancel);
+    }
+
+    private static string? IdHint(string id, IEnumerable<string> known) => IdSuggestion.Closest(id, known);
+
     /// <summary>Two cases (two networks, or two scenarios of one) solved alike and compared bus by bus and branch by branch.</summary>
     /// <exception cref="InputException">A scenario name matches no scenario of its network.</exception>
     public static CaseComparisonResult Compare(StudyCase before, string? beforeScenario, StudyCase after, string? afterScenario,
@@ -194,6 +218,21 @@ public sealed class StudyCase
         if (!Model(null).Taps.Any(t => t.Id == id))
             throw new InputException($"transformer {id} is out of service (or on an out-of-service bus): nothing to study", elementId: id);
     }
+}
+
+/// <summary>A profile study asked for: the scenario whose loads the profile scales, the buses to chart, the solver options.</summary>
+public sealed record ProfileRequest
+{
+    /// <summary>Scenario name; null for the loads as entered.</summary>
+    public string? Scenario { get; init; }
+
+    /// <summary>Buses whose voltage is kept for every step; empty means the buses the on-load tap changers regulate.</summary>
+    public IReadOnlyList<string> WatchBuses { get; init; } = [];
+
+    public LoadFlowOptions Options { get; init; } = LoadFlowOptions.Default;
+
+    /// <exception cref="InputException">An option is out of bounds.</exception>
+    public void Validate() => Options.Validate();
 }
 
 /// <summary>A load flow asked for: which scenario, with which solver options.</summary>
