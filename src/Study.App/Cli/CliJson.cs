@@ -24,6 +24,7 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(CompareJson))]
 [JsonSerializable(typeof(FaultJson))]
 [JsonSerializable(typeof(Profile.ProfileJson))]
+[JsonSerializable(typeof(Choose.ChooseJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson

@@ -1,6 +1,7 @@
 // Entry point of the command line: picks the subcommand, parses what it declared, runs it, turns failures into exit codes.
 using System.CommandLine;
 using System.CommandLine.Help;
+using Study.App.Cli.Choose;
 using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
@@ -30,6 +31,7 @@ public static class StudyCommand
         new CompareCommand(),
         new FaultCommand(),
         new ProfileCommand(),
+        new ChooseCommand(),
         new ExplainCommand(),
         new GenerateCommand(),
         new BenchCommand(),

@@ -183,6 +183,35 @@ public sealed class StudyCase
         return ProfileStudy.Run(model, profile, watch, request.Options, progress, cancel);
     }
 
+    /// <summary>The lv bus of a transformer and every bus reached from it through lines alone (the buses it feeds).</summary>
+    /// <exception cref="InputException">No in-service transformer has the id.</exception>
+    public IReadOnlyList<string> FedBuses(string transformerId)
+    {
+        PerUnitModel model = Model(null);
+        for (int k = 0; k < model.Branches.Count; k++)
+        {
+            PuBranch b = model.Branches[k];
+            if (b.Id == transformerId && b.Kind is BranchKind.Transformer or BranchKind.ThreeWindingTransformer)
+                return TapStudy.FedBuses(model, TapStudy.LvBus(model, k));
+        }
+        throw new InputException($"no transformer in service with id {transformerId}", elementId: transformerId);
+    }
+
+    /// <summary>
+    /// Each candidate bank in place of one transformer, held to the voltage band, loading, fault duty and
+    /// outages, then ranked by total owning cost. The annual energy comes from the profile when given.
+    /// </summary>
+    /// <exception cref="InputException">The request is invalid or names an unknown transformer, bus or scenario.</exception>
+    public BankChoiceResult Choose(BankChoiceRequest request, BankCandidates candidates, LoadProfile? profile = null,
+        CancellationToken cancel = default)
+    {
+        request.Validate();
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        Scenarios(request.Scenarios);
+        return BankChoice.Run(this, request, candidates, profile, cancel);
+    }
+
     private static string? IdHint(string id, IEnumerable<string> known) => IdSuggestion.Closest(id, known);
 
     /// <summary>Two cases (two networks, or two scenarios of one) solved alike and compared bus by bus and branch by branch.</summary>

@@ -133,7 +133,7 @@ public static partial class NetworkFile
     }
 
     /// <summary>Rewrites a serializer message into one that names the key, the line and the column.</summary>
-    private static InputException Translate(JsonException e, string? fileName)
+    internal static InputException Translate(JsonException e, string? fileName)
     {
         int? line = e.LineNumber is long l ? (int)l + 1 : null;
         int? column = e.BytePositionInLine is long c ? (int)c + 1 : null;

@@ -25,7 +25,7 @@ public static class TapStudy
         PerUnitModel first = models[0];
         int tapIndex = TapIndex(first, request.TransformerId);
         PuTap tapChanger = first.Taps[tapIndex];
-        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger));
+        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger.Branch));
         foreach (string bus in watch)
             if (!first.BusIndex.ContainsKey(bus)) throw new InputException($"watched bus {bus} is not in the network (or is out of service)", elementId: bus);
 
@@ -116,9 +116,9 @@ public static class TapStudy
     }
 
     /// <summary>The lv terminal of the tapped transformer: a two-winding bank's To bus, a three-winding bank's lv winding terminal.</summary>
-    private static int LvBus(PerUnitModel model, PuTap tap)
+    internal static int LvBus(PerUnitModel model, int branch)
     {
-        PuBranch tapped = model.Branches[tap.Branch];
+        PuBranch tapped = model.Branches[branch];
         if (tapped.Kind != BranchKind.ThreeWindingTransformer) return tapped.To;
         foreach (PuBranch b in model.Branches)
             if (b.Id == tapped.Id && b.Winding == "lv") return b.From;
