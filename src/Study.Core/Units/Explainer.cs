@@ -97,7 +97,7 @@ public static class Explainer
     private static ElementExplanation Generator(Network n, Generator g, double s, Scenario? scenario)
     {
         var inputs = new Inputs().Text("bus", g.Bus).Text("mode", g.Mode.ToString().ToLowerInvariant()).Num("pMw", g.PMw, "MW").Num("qMvar", g.QMvar, "Mvar")
-            .Num("vSet", g.VSet, "pu").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
+            .Num("vSet", g.VSet, "pu").Num("angleDeg", g.AngleDeg, "°").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
             .Num("mva", g.Mva, "MVA").Num("kv", g.Kv, "kV").Num("xdppPu", g.XdppPu, "pu").Num("x2Pu", g.X2Pu, "pu")
             .Num("x0Pu", g.X0Pu, "pu").Num("xr", g.Xr, "").Text("scenario", scenario?.Name);
         var c = GeneratorConversion.Convert(g, BusOf(n, g.Bus, g.Id), s, scenario?.GenerationScale ?? 1.0);

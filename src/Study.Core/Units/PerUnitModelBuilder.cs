@@ -144,7 +144,7 @@ public sealed partial record PerUnitModel
             sources.Add(new PuSource
             {
                 Id = g.Id, Kind = ElementKind.Generator, Bus = index[g.Bus], Mode = g.Mode,
-                P = c.P, Q = c.Q, VSet = c.VSet, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
+                P = c.P, Q = c.Q, VSet = c.VSet, AngleRad = c.AngleRad, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
                 Rating = GeneratorRating.Of(g), Neutral = PuNeutral.Compile(g.Neutral, bus.Kv, baseMva, g.Id, "neutral"),
             });
         }
