@@ -23,6 +23,7 @@ public static class NetworkValidator
         Each(context, ElementKind.ThreeWindingTransformer, network.ThreeWindingTransformers, ThreeWindingRules.Check);
         Each(context, ElementKind.Breaker, network.Breakers, BreakerRules.Check);
         Each(context, ElementKind.Scenario, network.Scenarios, ScenarioRules.Check);
+        SetPointRules.Check(context);
         TopologyRules.Check(context);
         return new ValidationReport(context.Problems);
     }
