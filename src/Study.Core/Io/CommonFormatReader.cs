@@ -176,7 +176,7 @@ public static class CommonFormatReader
         XPu = card.XPu,
         BPu = card.BPu != 0 ? card.BPu : null,
         Ratio = card.FinalRatio != 0 ? card.FinalRatio : 1.0,
-        PhaseShiftDeg = card.FinalAngleDeg,
+        PhaseShiftDeg = card.FinalAngleDeg != 0 ? card.FinalAngleDeg : null,
         RatingMva = card.Rating1Mva != 0 ? card.Rating1Mva : null,
     };
 

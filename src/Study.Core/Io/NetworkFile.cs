@@ -88,9 +88,19 @@ public static partial class NetworkFile
             throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName, line, column);
         }
         IReadOnlyList<string> notes = version == 1 ? [Version1Note(fileName)] : [];
+        if (version == 1) network = Version1Transformers(network);
         // The lines are only needed for messages: found on the first look-up, so a clean file skips the scan.
         return network with { Version = Network.CurrentVersion, Source = new SourceMap(fileName, () => ElementLines(utf8)) { Notes = notes } };
     }
+
+    /// <summary>
+    /// Version 1 files carry "phaseShiftDeg": 0 on every transformer, because its writer always wrote the
+    /// key; a 0 there says nothing, so it reads as not given and the vector group sets the displacement.
+    /// </summary>
+    private static Network Version1Transformers(Network network) =>
+        network.Transformers.Any(t => t is { PhaseShiftDeg: 0 })
+            ? network with { Transformers = network.Transformers.Select(t => t is { PhaseShiftDeg: 0 } ? t with { PhaseShiftDeg = null } : t).ToList() }
+            : network;
 
     /// <summary>
     /// The top-level "version" (the current one when absent), read before the rest because the keys of

@@ -48,7 +48,7 @@ public static class Explainer
     {
         var inputs = new Inputs().Text("hv", t.Hv).Text("lv", t.Lv).Num("mva", t.Mva, "MVA").Num("hvKv", t.HvKv, "kV").Num("lvKv", t.LvKv, "kV")
             .Num("zPercent", t.ZPercent, "%").Num("xr", t.Xr, "").Num("z0Percent", t.Z0Percent, "%").Num("units", t.Units, "")
-            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg == 0 ? null : t.PhaseShiftDeg, "°")
+            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg, "°")
             .Num("rPu", t.RPu, "pu").Num("xPu", t.XPu, "pu").Num("bPu", t.BPu, "pu").Num("ratio", t.Ratio, "pu")
             .Num("ratingMva", t.RatingMva, "MVA");
         AddTap(inputs, t.Tap);

@@ -25,6 +25,7 @@ public static class NetworkValidator
         Each(context, ElementKind.Scenario, network.Scenarios, ScenarioRules.Check);
         SetPointRules.Check(context);
         TopologyRules.Check(context);
+        PhaseDisplacementRules.Check(context);
         return new ValidationReport(context.Problems);
     }
 
