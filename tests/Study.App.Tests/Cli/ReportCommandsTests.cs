@@ -32,7 +32,7 @@ public class ReportCommandsTests
         using var dir = new TempDirectory();
         CliOutcome run = CliRun.Run("taps", DemoNetworks.Demo, "--transformer", "CQ-T1", "--csv", dir.Path, "--markdown", dir.File("taps.md"));
         Assert.Equal(0, run.ExitCode);
-        Assert.Equal(["position", "ratio", "scenario", "converged", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
+        Assert.Equal(["position", "ratio", "scenario", "converged", "solvedFromFlatStart", "lowVoltage", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
             "vMinPu", "vMinBus", "vMaxPu", "vMaxBus", "lossMw", "violations", "marginPu"], ReportChecks.CsvHeader(dir.File("positions.csv")));
         Assert.Equal(1 + 5 * 2, File.ReadAllLines(dir.File("positions.csv")).Length);
         Assert.Equal(["rank", "position", "marginPu"], ReportChecks.CsvHeader(dir.File("recommended.csv")));
