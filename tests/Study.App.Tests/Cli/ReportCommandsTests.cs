@@ -10,6 +10,8 @@ public class ReportCommandsTests
     public void Solve_markdown_holds_the_same_tables_as_the_terminal_report_and_lists_the_inputs()
     {
         using var dir = new TempDirectory();
+        // The folder must exist: output never creates folders (InputSafetyTests).
+        Directory.CreateDirectory(dir.File("notes"));
         string md = dir.File("notes/solve.md");
         CliOutcome run = CliRun.Run("solve", DemoNetworks.Demo, "--scenario", "winter-peak", "--markdown", md);
         Assert.Equal(0, run.ExitCode);
