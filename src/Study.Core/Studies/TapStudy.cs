@@ -30,6 +30,11 @@ public static class TapStudy
         PerUnitModel first = models[0];
         int tapIndex = TapIndex(first, request.TransformerId);
         PuTap tapChanger = first.Taps[tapIndex];
+        long positions = (long)tapChanger.Max - tapChanger.Min + 1;
+        if (positions > MostPositions)
+            throw new InputException($"transformer {request.TransformerId} has {positions} tap positions ({tapChanger.Min}..{tapChanger.Max}): " +
+                $"the tap study solves every one, and no tap changer has more than a few dozen; check tap.range (at most {MostPositions} are studied)",
+                elementId: request.TransformerId);
         IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger));
         foreach (string bus in watch)
             if (!first.BusIndex.ContainsKey(bus)) throw new InputException($"watched bus {bus} is not in the network (or is out of service)", elementId: bus);
@@ -61,6 +66,9 @@ public static class TapStudy
         }
         return Rank(request, tapChanger, watch, models.Select(m => m.Scenario).ToList(), points) with { Notes = notes };
     }
+
+    /// <summary>More positions than any tap changer has by far: a range this wide is a slip, and would take hours to sweep.</summary>
+    public const int MostPositions = 1000;
 
     /// <summary>Below this lowest voltage a solution is checked against a flat start: few networks run this low.</summary>
     private const double CheckBelowPu = 0.8;
