@@ -39,6 +39,7 @@ public static class StudyCommand
 
     public static int Run(IReadOnlyList<string> args, CommandContext context)
     {
+        context = context with { Out = TerminalText.Wrap(context.Out), Err = TerminalText.Wrap(context.Err) };
         if (args.Count == 0 || args[0] is "help" or "--help" or "-h" or "-?")
         {
             string? topic = args.Skip(1).FirstOrDefault();
@@ -86,6 +87,17 @@ public static class StudyCommand
             context.Err.WriteLine("This is a fault in Study, not in your data. Set STUDY_DEBUG=1 for details.");
             return ExitCode.Internal;
         }
+    }
+
+    /// <summary>
+    /// `study` or `study FILE` with standard input or output not a terminal (a script, a pipe, CI): the
+    /// terminal UI would wait for keys that never come, so say what to run instead. Exit code 2.
+    /// </summary>
+    public static int NoTerminal(TextWriter err)
+    {
+        err.WriteLine("study: the terminal UI needs a terminal, and standard input or output is not one (a script, a pipe or CI?).");
+        err.WriteLine("From a script run a command instead, e.g. 'study check FILE' or 'study solve FILE'; 'study help' lists them.");
+        return ExitCode.InputError;
     }
 
     public static bool IsCommand(string name) => name is "help" or "--help" or "-h" or "-?" || Find(name) is not null;

@@ -16,7 +16,9 @@ public sealed class TerminalProgress(TextWriter err, string label) : IProgress<d
 
     /// <summary>A progress line when <paramref name="err"/> is the process's standard error and that is a terminal; null otherwise.</summary>
     public static TerminalProgress? ForTerminal(TextWriter err, string label) =>
-        ReferenceEquals(err, Console.Error) && !Console.IsErrorRedirected ? new TerminalProgress(err, label) : null;
+        ReferenceEquals(TerminalText.Unwrap(err), Console.Error) && !Console.IsErrorRedirected
+            ? new TerminalProgress(TerminalText.Unwrap(err), label)
+            : null;
 
     public void Report(double value)
     {

@@ -97,10 +97,14 @@ public static class FaultStudy
         int n = model.Buses.Count;
         var pre = new Complex[n];
         var magnitude = new double[n];
+        // The load flow carries each bank's clock displacement in its ratio; the sequence networks leave it
+        // out and turn voltages by the clock lag instead (SequenceBranches), so a solved voltage is taken into
+        // their frame by undoing the displacements on the way to its bus (a turn of a whole island changes no magnitude).
+        double[] frame = Admittance.PhaseShifts.Accumulated(model, b => b.GroupShiftRad, []);
         foreach (BusResult b in flow.Buses)
         {
             if (!model.BusIndex.TryGetValue(b.Id, out int i) || !b.Energised) continue;
-            pre[i] = Complex.FromPolarCoordinates(b.VPu, b.AngleDeg * Math.PI / 180);
+            pre[i] = Complex.FromPolarCoordinates(b.VPu, b.AngleDeg * Math.PI / 180 + frame[i]);
             magnitude[i] = b.VPu;
         }
         return (pre, magnitude);

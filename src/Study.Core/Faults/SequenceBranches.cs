@@ -64,8 +64,9 @@ internal sealed class SequenceBranches
                 if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
             }
 
-            pos[k] = b with { Z = b.Z * kT, Ratio = ratio };
-            neg[k] = pos[k] with { ShiftRad = -b.ShiftRad };
+            // The vector group's displacement enters through the clock lag of the phase voltages, not the networks.
+            pos[k] = b with { Z = b.Z * kT, Ratio = ratio, ShiftRad = b.ShiftRad - b.GroupShiftRad, GroupShiftRad = 0 };
+            neg[k] = pos[k] with { ShiftRad = -pos[k].ShiftRad };
             eqf[k] = pos[k] with
             {
                 Z = Faults.EquivalentFrequency.Series(pos[k].Z, fcOverF),

@@ -26,6 +26,7 @@ public sealed class SequenceNetwork
 {
     private readonly SparseLu<Complex> lu;
     private readonly bool[] fed;
+    private readonly int[] island;
     private readonly BranchAdmittance[] twoPorts;
     private Complex[] scratch = new Complex[16];
 
@@ -40,7 +41,8 @@ public sealed class SequenceNetwork
         var series = new List<PuBranch>();
         foreach (PuBranch? b in branches) if (b is not null) series.Add(b);
         var seriesModel = model with { Branches = series };
-        fed = FedBuses(seriesModel, earth, options);
+        island = Islands.Label(seriesModel);
+        fed = FedBuses(seriesModel, island, earth, options);
         for (int i = 0; i < n; i++) if (!fed[i]) earth[i] += Complex.One;
 
         // Branches inside an unfed part carry no current; leaving them out makes those rows the identity.
@@ -73,6 +75,9 @@ public sealed class SequenceNetwork
     /// <summary>True when bus i reaches a source (positive, negative) or earth (zero) in this sequence.</summary>
     public bool IsFed(int bus) => fed[bus];
 
+    /// <summary>True when two buses are joined by this sequence's series branches (one island of the sequence network).</summary>
+    public bool Joined(int a, int b) => island[a] == island[b];
+
     /// <summary>
     /// The two-port of model branch k in this sequence, including a transformer's earthing at either
     /// end (zero sequence), so that I_from = Yff·V_from + Yft·V_to gives its current at the From end.
@@ -100,7 +105,7 @@ public sealed class SequenceNetwork
     }
 
     // A bus is fed when its island (over this sequence's series branches) holds any admittance to the reference.
-    private static bool[] FedBuses(PerUnitModel seriesModel, Complex[] earth, AdmittanceOptions options)
+    private static bool[] FedBuses(PerUnitModel seriesModel, int[] island, Complex[] earth, AdmittanceOptions options)
     {
         int n = seriesModel.Buses.Count;
         var toEarth = new bool[n];
@@ -112,7 +117,6 @@ public sealed class SequenceNetwork
             if (options.IncludeCharging && b.B != 0) toEarth[b.From] = toEarth[b.To] = true;
             if (options.IncludeMagnetising && b.MagnetisingY != Complex.Zero) toEarth[b.From] = true;
         }
-        int[] island = Islands.Label(seriesModel);
         var fedIsland = new bool[n];
         for (int i = 0; i < n; i++) if (toEarth[i]) fedIsland[island[i]] = true;
         var fed = new bool[n];

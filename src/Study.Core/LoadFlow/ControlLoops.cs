@@ -108,7 +108,8 @@ internal sealed class ControlLoops
             foreach (int k in group) AtLimit[k] = null;
             if (v >= low && v <= high) continue;
             double stepPu = Math.Abs(lead.PercentPerStep) / 100.0;
-            int wantedSteps = (int)Math.Round((lead.VTarget - v) / Math.Max(stepPu * v, 1e-9), MidpointRounding.AwayFromZero);
+            // Clamped before the cast: a zero step would otherwise ask for more steps than an int holds.
+            int wantedSteps = (int)Math.Clamp(Math.Round((lead.VTarget - v) / Math.Max(stepPu * v, 1e-9), MidpointRounding.AwayFromZero), -1e6, 1e6);
             if (wantedSteps == 0) wantedSteps = v < low ? 1 : -1;
             foreach (int k in group)
             {
@@ -118,7 +119,7 @@ internal sealed class ControlLoops
                 // A tap that has reversed twice is hunting across a band narrower than its step:
                 // from then on it moves one step at a time and stops at the next reversal.
                 if (reversals[k] >= 2) delta = Math.Sign(delta) == -Math.Sign(lastMove[k]) ? 0 : Math.Sign(delta);
-                int target = Math.Clamp(positions[k] + delta, tap.Min, tap.Max);
+                int target = (int)Math.Clamp((long)positions[k] + delta, tap.Min, tap.Max);
                 if (target == positions[k])
                 {
                     if (delta != 0) AtLimit[k] = delta > 0 ? TapLimit.Highest : TapLimit.Lowest;

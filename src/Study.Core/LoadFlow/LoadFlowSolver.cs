@@ -63,8 +63,16 @@ public static class LoadFlowSolver
     {
         int n = model.Buses.Count;
         var slackAngle = new Dictionary<int, double>();
+        var slackBuses = new List<int>();
         for (int i = 0; i < n; i++)
-            if (schedule.Type[i] == BusType.Slack) slackAngle.TryAdd(island[i], schedule.AngleSet[i]);
+        {
+            if (schedule.Type[i] != BusType.Slack) continue;
+            slackBuses.Add(i);
+            slackAngle.TryAdd(island[i], schedule.AngleSet[i]);
+        }
+        // A flat start puts each bus at its slack's angle less the phase shifts on the way (a Dyn1 bank's lv
+        // side 30° behind): started at the slack's angle, Newton-Raphson can land on a low-voltage solution.
+        double[] shifted = PhaseShifts.Accumulated(model, b => b.ShiftRad, slackBuses);
         Dictionary<string, BusResult>? previous = warm?.Converged == true
             ? warm.Buses.ToDictionary(b => b.Id) : null;
         for (int i = 0; i < n; i++)
@@ -76,7 +84,7 @@ public static class LoadFlowSolver
                 continue;
             }
             double vm = t == BusType.Pq ? 1.0 : schedule.VSet[i];
-            double angle = t == BusType.Slack ? schedule.AngleSet[i] : slackAngle[island[i]];
+            double angle = t == BusType.Slack ? schedule.AngleSet[i] : slackAngle[island[i]] - shifted[i];
             if (t == BusType.Pq && previous is not null && previous.TryGetValue(model.Buses[i].Id, out var b) && b.VPu > 0)
             {
                 vm = b.VPu;

@@ -48,7 +48,7 @@ public static class Explainer
     {
         var inputs = new Inputs().Text("hv", t.Hv).Text("lv", t.Lv).Num("mva", t.Mva, "MVA").Num("hvKv", t.HvKv, "kV").Num("lvKv", t.LvKv, "kV")
             .Num("zPercent", t.ZPercent, "%").Num("xr", t.Xr, "").Num("z0Percent", t.Z0Percent, "%").Num("units", t.Units, "")
-            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg == 0 ? null : t.PhaseShiftDeg, "°")
+            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg, "°")
             .Num("rPu", t.RPu, "pu").Num("xPu", t.XPu, "pu").Num("bPu", t.BPu, "pu").Num("ratio", t.Ratio, "pu")
             .Num("ratingMva", t.RatingMva, "MVA");
         AddTap(inputs, t.Tap);
@@ -97,7 +97,7 @@ public static class Explainer
     private static ElementExplanation Generator(Network n, Generator g, double s, Scenario? scenario)
     {
         var inputs = new Inputs().Text("bus", g.Bus).Text("mode", g.Mode.ToString().ToLowerInvariant()).Num("pMw", g.PMw, "MW").Num("qMvar", g.QMvar, "Mvar")
-            .Num("vSet", g.VSet, "pu").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
+            .Num("vSet", g.VSet, "pu").Num("angleDeg", g.AngleDeg, "°").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
             .Num("mva", g.Mva, "MVA").Num("kv", g.Kv, "kV").Num("xdppPu", g.XdppPu, "pu").Num("x2Pu", g.X2Pu, "pu")
             .Num("x0Pu", g.X0Pu, "pu").Num("xr", g.Xr, "").Text("scenario", scenario?.Name);
         var c = GeneratorConversion.Convert(g, BusOf(n, g.Bus, g.Id), s, scenario?.GenerationScale ?? 1.0);

@@ -40,6 +40,11 @@ public sealed record PuBranch
     public double B { get; init; }
     public double Ratio { get; init; } = 1.0;
     public double ShiftRad { get; init; }
+    /// <summary>
+    /// The part of <see cref="ShiftRad"/> that is the vector group's clock displacement. Fault studies
+    /// build their sequence networks without it and turn voltages across the bank by the clock lag.
+    /// </summary>
+    public double GroupShiftRad { get; init; }
     /// <summary>Magnetising admittance G − jB at the From terminal (transformers).</summary>
     public Complex MagnetisingY { get; init; }
     public double? RatingMva { get; init; }

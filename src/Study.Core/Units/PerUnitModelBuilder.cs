@@ -73,6 +73,7 @@ public sealed partial record PerUnitModel
             {
                 Id = t.Id, Kind = BranchKind.Transformer, From = index[t.Hv], To = index[t.Lv],
                 Z = c.ZPu, Z0 = c.Z0Pu, B = c.BPu, Ratio = c.Ratio, ShiftRad = c.ShiftRad,
+                GroupShiftRad = c.ShiftFromGroup ? c.ShiftRad : 0,
                 MagnetisingY = c.MagnetisingY, RatingMva = c.RatingMva, Tap = tapIndex,
                 Rating = TransformerRating.Of(t), Units = t.Units,
                 Windings = PuWindings.Compile(t.Id, t.VectorGroup, threeWinding: false, hvNeutral, PuNeutral.NotStated, lvNeutral),
@@ -106,7 +107,7 @@ public sealed partial record PerUnitModel
                 branches.Add(new PuBranch
                 {
                     Id = t.Id, Kind = BranchKind.ThreeWindingTransformer, From = index[terminal], To = star,
-                    Z = w.ZPu, Z0 = w.ZPu, Ratio = w.Ratio, RatingMva = w.RatingMva, Winding = w.Winding, Tap = tapIndex,
+                    Z = w.ZPu, Z0 = w.ZPu, Ratio = w.Ratio, ShiftRad = w.ShiftRad, GroupShiftRad = w.ShiftRad, RatingMva = w.RatingMva, Winding = w.Winding, Tap = tapIndex,
                     MagnetisingY = w.Winding == "hv" ? c.MagnetisingY : Complex.Zero,
                     ThreeWindingRating = rating, Windings = windings,
                 });
@@ -144,7 +145,7 @@ public sealed partial record PerUnitModel
             sources.Add(new PuSource
             {
                 Id = g.Id, Kind = ElementKind.Generator, Bus = index[g.Bus], Mode = g.Mode,
-                P = c.P, Q = c.Q, VSet = c.VSet, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
+                P = c.P, Q = c.Q, VSet = c.VSet, AngleRad = c.AngleRad, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
                 Rating = GeneratorRating.Of(g), Neutral = PuNeutral.Compile(g.Neutral, bus.Kv, baseMva, g.Id, "neutral"),
             });
         }

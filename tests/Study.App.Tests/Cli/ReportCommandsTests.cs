@@ -10,6 +10,8 @@ public class ReportCommandsTests
     public void Solve_markdown_holds_the_same_tables_as_the_terminal_report_and_lists_the_inputs()
     {
         using var dir = new TempDirectory();
+        // The folder must exist: output never creates folders (InputSafetyTests).
+        Directory.CreateDirectory(dir.File("notes"));
         string md = dir.File("notes/solve.md");
         CliOutcome run = CliRun.Run("solve", DemoNetworks.Demo, "--scenario", "winter-peak", "--markdown", md);
         Assert.Equal(0, run.ExitCode);
@@ -32,7 +34,7 @@ public class ReportCommandsTests
         using var dir = new TempDirectory();
         CliOutcome run = CliRun.Run("taps", DemoNetworks.Demo, "--transformer", "CQ-T1", "--csv", dir.Path, "--markdown", dir.File("taps.md"));
         Assert.Equal(0, run.ExitCode);
-        Assert.Equal(["position", "ratio", "scenario", "converged", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
+        Assert.Equal(["position", "ratio", "scenario", "converged", "solvedFromFlatStart", "lowVoltage", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
             "vMinPu", "vMinBus", "vMaxPu", "vMaxBus", "lossMw", "violations", "marginPu"], ReportChecks.CsvHeader(dir.File("positions.csv")));
         Assert.Equal(1 + 5 * 2, File.ReadAllLines(dir.File("positions.csv")).Length);
         Assert.Equal(["rank", "position", "marginPu"], ReportChecks.CsvHeader(dir.File("recommended.csv")));

@@ -66,7 +66,7 @@ public static class BranchFields
         Field.Integer<Transformer>("Units", "", 1, e => e.Units, (e, v) => e with { Units = v }).Keyed("units"),
         Field.Text<Transformer>("Vector group", e => e.VectorGroup, (e, v) => e with { VectorGroup = v }).Keyed("vectorGroup"),
         .. TapFields.For<Transformer>(e => e.Tap, (e, t) => e with { Tap = TapFields.Normalise(t) }),
-        Field.Number<Transformer>("Phase shift", "°", 0, e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }).Keyed("phaseShiftDeg"),
+        Field.Optional<Transformer>("Phase shift", "°", "= vector group", e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }).Keyed("phaseShiftDeg"),
         Field.Optional<Transformer>("Loading rating", "MVA", "= rating", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
         Field.Optional<Transformer>("R", "pu", "", e => e.RPu, (e, v) => e with { RPu = v }).Keyed("rPu"),
         Field.Optional<Transformer>("X", "pu", "", e => e.XPu, (e, v) => e with { XPu = v }).Keyed("xPu"),

@@ -23,7 +23,9 @@ public static class NetworkValidator
         Each(context, ElementKind.ThreeWindingTransformer, network.ThreeWindingTransformers, ThreeWindingRules.Check);
         Each(context, ElementKind.Breaker, network.Breakers, BreakerRules.Check);
         Each(context, ElementKind.Scenario, network.Scenarios, ScenarioRules.Check);
+        SetPointRules.Check(context);
         TopologyRules.Check(context);
+        PhaseDisplacementRules.Check(context);
         return new ValidationReport(context.Problems);
     }
 

@@ -42,7 +42,7 @@ internal static class WindingKvRules
                     $"{match.Bus!.Id} ({Numbers.Show(match.Bus.Kv)} kV), not {w.Side} bus {w.Bus!.Id} ({Numbers.Show(busKv)} kV)");
             else
                 at.Warning(w.KvField, $"rated kV {Numbers.Show(rated)} differs from bus base kV {Numbers.Show(busKv)} " +
-                    $"(bus {w.Bus!.Id}) by {Numbers.Percent(off)} %: check {w.KvField} and the bus kv");
+                    $"(bus {w.Bus!.Id}) {Numbers.Difference(rated, busKv)}: check {w.KvField} and the bus kv");
         }
         return swapped;
     }
