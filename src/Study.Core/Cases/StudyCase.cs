@@ -171,9 +171,9 @@ public sealed class StudyCase
         request.Validate();
         if (profile.LoadIds is { } ids)
             for (int k = 0; k < ids.Count; k++)
-                if (!Network.Loads.Any(l => l.Id == ids[k]))
-                    throw new InputException($"column '{ids[k]}' names no load of the network"
-                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id)) is { } near ? $": did you mean '{near}'?" : ""),
+                if (!Network.Loads.Any(l => l.Id == ids[k]) && !Network.Motors.Any(m => m.Id == ids[k]))
+                    throw new InputException($"column '{ids[k]}' names no load or motor of the network"
+                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id).Concat(Network.Motors.Select(m => m.Id))) is { } near ? $": did you mean '{near}'?" : ""),
                         profile.Source, 1, profile.LoadColumns?[k]);
         foreach (string bus in request.WatchBuses)
             if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
