@@ -24,6 +24,7 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(CompareJson))]
 [JsonSerializable(typeof(FaultJson))]
 [JsonSerializable(typeof(Profile.ProfileJson))]
+[JsonSerializable(typeof(Start.StartJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson

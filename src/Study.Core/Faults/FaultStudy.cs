@@ -39,7 +39,8 @@ public static class FaultStudy
                     Method = request.Method, Level = request.Level, PerUnitOnly = model.PerUnitOnly,
                     Failure = $"the pre-fault load flow did not converge: {flow.Message} (the iec60909 method needs no load flow)",
                 };
-            model = WithSolvedTaps(model, flow);
+            // The load flow may have moved on-load taps; the fault sees the network at those positions.
+            model = model.WithSolvedTaps(flow);
             (preFault, voltage) = Voltages(model, flow);
             notes.Add("load-flow method: branch contributions are the fault-induced change, without the pre-fault load current");
         }
@@ -103,15 +104,6 @@ public static class FaultStudy
             if (!selected.Contains(i)) selected.Add(i);
         }
         return selected.ToArray();
-    }
-
-    // The load flow may have moved on-load taps; the fault sees the network at those positions.
-    private static PerUnitModel WithSolvedTaps(PerUnitModel model, LoadFlowResult flow)
-    {
-        for (int t = 0; t < model.Taps.Count && t < flow.Taps.Count; t++)
-            if (flow.Taps[t].Id == model.Taps[t].Id && flow.Taps[t].Position != model.Taps[t].Position)
-                model = model.WithTapPosition(t, flow.Taps[t].Position);
-        return model;
     }
 
     private static (Complex[] PreFault, double[] Magnitude) Voltages(PerUnitModel model, LoadFlowResult flow)

@@ -226,6 +226,16 @@ public sealed partial record PerUnitModel
         return this with { Taps = newTaps, Branches = newBranches };
     }
 
+    /// <summary>The same model with each tap at the position a solved load flow left it (on-load changers may have moved).</summary>
+    public PerUnitModel WithSolvedTaps(LoadFlow.LoadFlowResult flow)
+    {
+        PerUnitModel model = this;
+        for (int t = 0; t < Taps.Count && t < flow.Taps.Count; t++)
+            if (flow.Taps[t].Id == Taps[t].Id && flow.Taps[t].Position != Taps[t].Position)
+                model = model.WithTapPosition(t, flow.Taps[t].Position);
+        return model;
+    }
+
     /// <summary>
     /// The same model with every branch of element <paramref name="id"/> taken out (a line, a
     /// transformer, or the three winding branches of a three-winding bank, whose star bus is then left
