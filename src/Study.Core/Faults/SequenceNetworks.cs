@@ -72,9 +72,10 @@ public sealed class SequenceNetworks
         var none = new Complex[m];
 
         var positive = new SequenceNetwork(Sequence.Positive, model, branches.Positive, (Complex[])sources.Positive.Clone(), none, none, options);
-        var negative = new SequenceNetwork(Sequence.Negative, model, branches.Negative, (Complex[])sources.Negative.Clone(), none, none, options);
+        // The negative and equivalent-frequency networks have the positive sequence's pattern: one ordering serves all three.
+        var negative = new SequenceNetwork(Sequence.Negative, model, branches.Negative, (Complex[])sources.Negative.Clone(), none, none, options, positive);
         var equivalent = new SequenceNetwork(Sequence.Positive, model with { Shunts = ShuntsAt(model, k) },
-            branches.EquivalentFrequency, sources.EquivalentFrequency, none, none, options);
+            branches.EquivalentFrequency, sources.EquivalentFrequency, none, none, options, positive);
 
         SequenceNetwork? zero = null;
         if (branches.Zero is { } paths)
@@ -105,7 +106,7 @@ public sealed class SequenceNetworks
             if (atFrequency.TryGetValue(fcOverF, out SequenceNetwork? network)) return network;
             var branches = positiveBranches.Select(b => SequenceBranches.AtFrequency(b, fcOverF)).ToArray();
             network = new SequenceNetwork(Sequence.Positive, model with { Shunts = ShuntsAt(model, fcOverF) }, branches,
-                sources.EquivalentFrequencyAt(fcOverF), new Complex[branches.Length], new Complex[branches.Length], options);
+                sources.EquivalentFrequencyAt(fcOverF), new Complex[branches.Length], new Complex[branches.Length], options, EquivalentFrequency);
             atFrequency[fcOverF] = network;
             return network;
         }
@@ -114,13 +115,13 @@ public sealed class SequenceNetworks
     /// <summary>The positive sequence without the motors (the steady-state current); the positive sequence itself when none feeds it.</summary>
     public SequenceNetwork PositiveWithoutMotors => sources.PositiveWithoutMotors is { } y
         ? positiveWithoutMotors ??= new SequenceNetwork(Sequence.Positive, model, positiveBranches, (Complex[])y.Clone(),
-            new Complex[positiveBranches.Length], new Complex[positiveBranches.Length], options)
+            new Complex[positiveBranches.Length], new Complex[positiveBranches.Length], options, Positive)
         : Positive;
 
     /// <summary>The negative sequence without the motors; the negative sequence itself when none feeds it.</summary>
     public SequenceNetwork NegativeWithoutMotors => sources.NegativeWithoutMotors is { } y
         ? negativeWithoutMotors ??= new SequenceNetwork(Sequence.Negative, model, negativeBranches, (Complex[])y.Clone(),
-            new Complex[negativeBranches.Length], new Complex[negativeBranches.Length], options)
+            new Complex[negativeBranches.Length], new Complex[negativeBranches.Length], options, Negative)
         : Negative;
 
     private static List<PuShunt> ShuntsAt(PerUnitModel model, double fcOverF) => model.Shunts
