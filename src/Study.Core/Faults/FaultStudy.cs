@@ -72,6 +72,8 @@ public static class FaultStudy
             notes.Add("minimum levels: breaker duty below is against minimum fault levels; switchgear is rated against the maximum");
         if (model.Motors.Count > 0 && request.Level == FaultLevel.Max)
             notes.Add("steady-state I_k: I''k with the motors left out (far from generators: generators' decay not modelled)");
+        foreach (PuBreaker b in model.Breakers.Where(b => b.BranchId is not null && b.Branch is null))
+            notes.Add($"{b.Id}: branch {b.BranchId} is out of service (or not at bus {b.BusId}): its duty is that of its bus");
         if (request.Breaking == BreakingCurrent.Conservative)
             notes.Add("breaking current: I_b = I''k everywhere (conservative)");
         else if (faults.Any(f => f.BreakerCurrents.Any(c => !c.DecayCredited)))
