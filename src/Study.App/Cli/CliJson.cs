@@ -25,6 +25,7 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(FaultJson))]
 [JsonSerializable(typeof(Profile.ProfileJson))]
 [JsonSerializable(typeof(Choose.ChooseJson))]
+[JsonSerializable(typeof(Start.StartJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson

@@ -9,6 +9,7 @@ using Study.App.Cli.Outages;
 using Study.App.Cli.Profile;
 using Study.App.Cli.Scale;
 using Study.App.Cli.Solve;
+using Study.App.Cli.Start;
 using Study.App.Cli.Taps;
 using Study.Core.Model;
 
@@ -30,6 +31,7 @@ public static class StudyCommand
         new OutagesCommand(),
         new CompareCommand(),
         new FaultCommand(),
+        new StartCommand(),
         new ProfileCommand(),
         new ChooseCommand(),
         new ExplainCommand(),
@@ -123,7 +125,7 @@ public static class StudyCommand
     private static int Overview(CommandContext context)
     {
         TextWriter o = context.Out;
-        o.WriteLine("study: load flow, tap choice and fault levels on single-line networks");
+        o.WriteLine("study: load flow, tap choice, fault levels and motor starting on single-line networks");
         o.WriteLine();
         o.WriteLine("  study                 open the terminal UI on the bundled demo network");
         o.WriteLine("  study FILE            open the terminal UI on FILE");

@@ -142,12 +142,22 @@ internal static class BankChoice
             foreach ((string branch, double pct) in o.Overloads.Where(x => !o.Judged.ContainsKey(x.Key)))
                 notes.Add($"with {o.Element} out {branch} is loaded {Show(pct, 0)} % {Case(o.Scenario)} whichever bank is bought: a limit of the network beyond the bank");
         }
+        // The breaker checks over their rating with the existing bank: the switchgear falls short whichever
+        // bank is bought, so they are notes too (each candidate's percentage stays in its row).
+        var existingOver = new Dictionary<string, double>(StringComparer.Ordinal);
+        foreach (BreakerDuty d in FaultsAt(study, AffectedBuses(study, original), [], cancel)?.Breakers ?? [])
+            foreach (DutyCheck check in d.Checks.Where(x => x.Status == DutyStatus.Over && x.DutyPercent is not null))
+            {
+                existingOver[DutyKey(d, check)] = check.DutyPercent!.Value;
+                notes.Add($"{d.Id} {CheckName(check.Check)} duty is {Show(check.DutyPercent!.Value, 0)} % with the existing {original.Id} as well: " +
+                    "its switchgear falls short whichever bank is bought");
+            }
         // Candidates are independent: each on its own core, the results in the file's order.
         var assessed = new CandidateAssessment[candidates.Candidates.Count];
         try
         {
             Parallel.For(0, assessed.Length, new ParallelOptions { CancellationToken = cancel }, k =>
-                assessed[k] = Assess(study, original, candidates.Candidates[k], candidates, request, profile, elements, existing, cancel));
+                assessed[k] = Assess(study, original, candidates.Candidates[k], candidates, request, profile, elements, existing, existingOver, cancel));
         }
         catch (AggregateException e) when (e.InnerExceptions.FirstOrDefault(x => x is InputException or OperationCanceledException) is { } first)
         {
@@ -167,7 +177,7 @@ internal static class BankChoice
     }
 
     private static CandidateAssessment Assess(StudyCase study, Transformer original, BankCandidate c, BankCandidates file,
-        BankChoiceRequest request, LoadProfile? profile, IReadOnlyList<string> elements, HashSet<string> existing, CancellationToken cancel)
+        BankChoiceRequest request, LoadProfile? profile, IReadOnlyList<string> elements, HashSet<string> existing, Dictionary<string, double> existingOver, CancellationToken cancel)
     {
         double p0 = (c.NoLoad?.P0Kw ?? 0) * c.Units, pk = c.LoadLossKw * c.Units;
         double capitalised = request.NoLoadRate * p0 + request.LoadRate * pk;
@@ -262,8 +272,9 @@ internal static class BankChoice
         {
             if (d.DutyPercent is not double pct) continue;
             if (duty is null || pct > duty) (duty, dutyBreaker) = (pct, d.Id);
-            if (d.Status == DutyStatus.Over)
-                reasons.Add($"{d.Id} {((d.BreakingPercent ?? 0) >= (d.MakingPercent ?? 0) ? "breaking" : "making")} duty {Show(pct, 0)} %");
+            foreach (DutyCheck check in d.Checks.Where(x => x.Status == DutyStatus.Over && x.DutyPercent is not null))
+                if (!existingOver.ContainsKey(DutyKey(d, check)))
+                    reasons.Add($"{d.Id} {CheckName(check.Check)} duty {Show(check.DutyPercent!.Value, 0)} %");
         }
 
         // 4. Outages of the bank and of the branches at its buses: the bank, its parallel units and the lines it feeds stay within rating.
@@ -460,6 +471,17 @@ internal static class BankChoice
             }
         }
     }
+
+    private static string DutyKey(BreakerDuty d, DutyCheck check) => $"{d.Id}\n{check.Check}";
+
+    /// <summary>"breaking", "asymmetric breaking", "making", "short-time": the checks as a reason reads them.</summary>
+    private static string CheckName(DutyCheckKind check) => check switch
+    {
+        DutyCheckKind.Breaking => "breaking",
+        DutyCheckKind.BreakingAsym => "asymmetric breaking",
+        DutyCheckKind.Making => "making",
+        _ => "short-time",
+    };
 
     private static string Case(Scenario? s) => Case(s?.Name);
 

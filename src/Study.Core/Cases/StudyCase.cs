@@ -171,9 +171,9 @@ public sealed class StudyCase
         request.Validate();
         if (profile.LoadIds is { } ids)
             for (int k = 0; k < ids.Count; k++)
-                if (!Network.Loads.Any(l => l.Id == ids[k]))
-                    throw new InputException($"column '{ids[k]}' names no load of the network"
-                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id)) is { } near ? $": did you mean '{near}'?" : ""),
+                if (!Network.Loads.Any(l => l.Id == ids[k]) && !Network.Motors.Any(m => m.Id == ids[k]))
+                    throw new InputException($"column '{ids[k]}' names no load or motor of the network"
+                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id).Concat(Network.Motors.Select(m => m.Id))) is { } near ? $": did you mean '{near}'?" : ""),
                         profile.Source, 1, profile.LoadColumns?[k]);
         foreach (string bus in request.WatchBuses)
             if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
@@ -213,6 +213,22 @@ public sealed class StudyCase
     }
 
     private static string? IdHint(string id, IEnumerable<string> known) => IdSuggestion.Closest(id, known);
+
+    /// <summary>The instant one or more motors start: every bus before and during, each started motor's terminal voltage.</summary>
+    /// <exception cref="InputException">The request is invalid, or names a motor or watched bus that is not in the network.</exception>
+    public MotorStartResult Start(MotorStartRequest request, CancellationToken cancel = default)
+    {
+        request.Validate();
+        foreach (string id in request.Motors)
+            if (!Network.Motors.Any(m => m.Id == id))
+                throw new InputException($"no motor with id {id}"
+                    + (IdHint(id, Network.Motors.Select(m => m.Id)) is { } near ? $": did you mean '{near}'?"
+                        : Network.Motors.Count == 0 ? " (the network has no motors)" : $" (motors: {string.Join(", ", Network.Motors.Select(m => m.Id))})"),
+                    elementId: id);
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        return MotorStart.Run(Model(Scenario(request.Scenario)), request, cancel);
+    }
 
     /// <summary>Two cases (two networks, or two scenarios of one) solved alike and compared bus by bus and branch by branch.</summary>
     /// <exception cref="InputException">A scenario name matches no scenario of its network.</exception>

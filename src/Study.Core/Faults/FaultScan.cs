@@ -14,7 +14,7 @@ namespace Study.Core.Faults;
 /// by superposition the fault changes bus voltages by ΔV_s = −Z_s[:, k]·I_s, and branch currents by the
 /// branch two-ports applied to ΔV. Column buffers are allocated once for the whole scan.
 /// </summary>
-internal sealed class FaultScan
+internal sealed partial class FaultScan
 {
     private static readonly double Sqrt2 = Math.Sqrt(2), Sqrt3 = Math.Sqrt(3);
     private readonly PerUnitModel model;
@@ -50,6 +50,7 @@ internal sealed class FaultScan
         neighbours = new (int, int)[n][];
         for (int i = 0; i < n; i++) neighbours[i] = NeighboursOf(i);
         unbalanced = request.Kinds.Any(k => k != FaultKind.ThreePhase);
+        InitialiseDuty();
         rowsRead = new int[n][];
         for (int i = 0; i < n; i++) rowsRead[i] = RowsRead(i);
     }
@@ -71,6 +72,7 @@ internal sealed class FaultScan
                 Add(model.Branches[b].To);
             }
         }
+        foreach (int end in BreakerBranchEnds(bus)) Add(end);
         return rows.ToArray();
     }
 
@@ -90,6 +92,7 @@ internal sealed class FaultScan
         Complex? zk1 = networks.Positive.IsFed(bus) ? z1[bus] : null;
         Complex? zk2 = networks.Negative.IsFed(bus) ? z2[bus] : null;
         Complex? zk0 = zero is not null && zero.IsFed(bus) ? z0[bus] : null;
+        PrepareDuty(bus);
 
         Complex zf = Complex.Zero;
         if (request.FaultImpedanceOhm != Complex.Zero)
@@ -117,7 +120,7 @@ internal sealed class FaultScan
             SequenceValues current = SymmetricalComponents.FaultCurrents(kind, e, zk1, zk2, zk0, zf);
             double ik = current.LargestPhaseMagnitude;
             double earth = (3 * current.Zero).Magnitude;
-            into.Add(new ShortCircuitLevel
+            into.Add(WithDuty(bus, e, zf, current, zk0, new ShortCircuitLevel
             {
                 Bus = pu.Id, Kv = kv, Kind = kind, VoltageFactor = preFault is null ? c : e.Magnitude,
                 IkPu = ik, IkKa = ik * baseKa, EarthCurrentPu = earth, EarthCurrentKa = earth * baseKa,
@@ -127,7 +130,7 @@ internal sealed class FaultScan
                 Z1Pu = zk1, Z2Pu = zk2, Z0Pu = zk0, Z1Ohm = Ohm(zk1), Z2Ohm = Ohm(zk2), Z0Ohm = Ohm(zk0),
                 Voltages = request.IncludeVoltages ? Voltages(bus, kind, e, current) : [],
                 Contributions = request.IncludeContributions ? Contributions(bus, current, baseKa) : [],
-            });
+            }));
         }
     }
 

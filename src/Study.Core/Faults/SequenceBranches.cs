@@ -21,7 +21,10 @@ internal sealed class SequenceBranches
     public required int[] ClockLag { get; init; }
 
     /// <param name="zeroRequired">True for an earth-fault study: missing zero-sequence data is an input error.</param>
-    public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes)
+    /// <param name="transformerFactors">Power-station units: the factor that replaces K_T, by branch index.</param>
+    /// <param name="lineResistanceC">Minimum levels: lines at this conductor temperature (their data at 20 °C); null to take the data as given.</param>
+    public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes,
+        IReadOnlyDictionary<int, double>? transformerFactors = null, double? lineResistanceC = null)
     {
         var kThree = new Dictionary<string, (double Hv, double Mv, double Lv)>();
         bool iec = method == FaultMethod.Iec60909;
@@ -42,7 +45,9 @@ internal sealed class SequenceBranches
             VectorGroup? group = null;
             if (b.Kind == BranchKind.Transformer)
             {
-                if (iec)
+                if (iec && transformerFactors is not null && transformerFactors.TryGetValue(k, out double unit))
+                    kT = unit;
+                else if (iec)
                 {
                     double? corrected = ImpedanceCorrection.TwoWinding(b.Rating, model.Buses[b.To].BaseKv);
                     if (corrected is double value) kT = value;
@@ -64,19 +69,20 @@ internal sealed class SequenceBranches
                 if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
             }
 
+            // R_L = [1 + α·(θ_e − 20 °C)]·R_L20 for minimum levels (IEC 60909-0, from memory; DEVELOPERS.md, Algorithms).
+            double rFactor = lineResistanceC is double theta && b.ResistanceCoefficient is double alpha
+                ? ConductorResistance.Factor(alpha, theta) : 1.0;
+            if (rFactor != 1.0) b = b with { Z = new Complex(b.Z.Real * rFactor, b.Z.Imaginary), Z0 = b.Z0 is Complex l0 ? new Complex(l0.Real * rFactor, l0.Imaginary) : null };
             // The vector group's displacement enters through the clock lag of the phase voltages, not the networks.
             pos[k] = b with { Z = b.Z * kT, Ratio = ratio, ShiftRad = b.ShiftRad - b.GroupShiftRad, GroupShiftRad = 0 };
             neg[k] = pos[k] with { ShiftRad = -pos[k].ShiftRad };
-            eqf[k] = pos[k] with
-            {
-                Z = Faults.EquivalentFrequency.Series(pos[k].Z, fcOverF),
-                B = b.B * fcOverF,
-                MagnetisingY = Faults.EquivalentFrequency.Parallel(b.MagnetisingY, fcOverF),
-            };
+            eqf[k] = AtFrequency(pos[k], fcOverF);
             if (zeroProblem is null)
                 zero[k] = ZeroPath(model, pos[k], b, kT, group, notes, ref zeroProblem);
         }
 
+        if (lineResistanceC is double c && model.Branches.Any(b => b.ResistanceCoefficient is not null))
+            notes.Add(FormattableString.Invariant($"minimum levels: line resistance at {c:0.#} °C, the end-of-fault temperature (the data taken at 20 °C)"));
         if (zeroProblem is not null && zeroRequired) throw zeroProblem;
         return new SequenceBranches
         {
@@ -84,6 +90,14 @@ internal sealed class SequenceBranches
             Zero = zeroProblem is null ? zero : null,
         };
     }
+
+    /// <summary>A positive-sequence branch with its reactances at f_c/f (IEC 60909-0 §8.1.3 method C): the charging scales with f, the magnetising inversely.</summary>
+    public static PuBranch AtFrequency(PuBranch positive, double fcOverF) => positive with
+    {
+        Z = Faults.EquivalentFrequency.Series(positive.Z, fcOverF),
+        B = positive.B * fcOverF,
+        MagnetisingY = Faults.EquivalentFrequency.Parallel(positive.MagnetisingY, fcOverF),
+    };
 
     private static VectorGroup? GroupOf(PuBranch b, bool threeWinding, ref InputException? problem)
     {
@@ -113,6 +127,12 @@ internal sealed class SequenceBranches
                 Complex z0 = (b.Z0 ?? b.Z) * kT;
                 Complex? hv = Neutral(b.Id, "hv", group.Hv, w.HvNeutral, notes);
                 Complex? lv = Neutral(b.Id, "lv", group.Lv, w.LvNeutral, notes);
+                // A bank of parallel units has one neutral impedance per unit: the bank's is Z_N/units (DEVELOPERS.md, Per-unit rules).
+                if (b.Units > 1)
+                {
+                    hv /= b.Units;
+                    lv /= b.Units;
+                }
                 return ZeroSequencePath.TwoWinding(corrected, z0, group, hv, lv);
             }
             case BranchKind.ThreeWindingTransformer when group is not null:

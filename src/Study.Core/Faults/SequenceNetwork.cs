@@ -33,8 +33,10 @@ public sealed class SequenceNetwork
     /// <param name="model">The model whose buses are used; its branches are replaced by <paramref name="branches"/>.</param>
     /// <param name="branches">Every branch of the model for this sequence, aligned with model.Branches; null where it carries nothing in series.</param>
     /// <param name="earth">Per-bus admittance to the reference (sources, earthing, loads as impedances); overwritten.</param>
+    /// <param name="samePattern">A network whose symbolic analysis to reuse when its matrix has this one's pattern (the
+    /// same network at another frequency, or without some sources): the ordering is done once.</param>
     internal SequenceNetwork(Sequence sequence, PerUnitModel model, IReadOnlyList<PuBranch?> branches, Complex[] earth,
-        Complex[] earthAtFrom, Complex[] earthAtTo, AdmittanceOptions options)
+        Complex[] earthAtFrom, Complex[] earthAtTo, AdmittanceOptions options, SequenceNetwork? samePattern = null)
     {
         Sequence = sequence;
         int n = model.Buses.Count;
@@ -49,7 +51,9 @@ public sealed class SequenceNetwork
         var live = new List<PuBranch>(series.Count);
         foreach (PuBranch b in series) if (fed[b.From]) live.Add(b);
         Admittance = new AdmittanceMatrix(model with { Branches = live }, options, earth);
-        lu = SparseLu<Complex>.Analyse(Admittance.Matrix);
+        lu = samePattern is not null && SamePattern(samePattern.Admittance.Matrix, Admittance.Matrix)
+            ? new SparseLu<Complex>(samePattern.lu.Symbolic)
+            : SparseLu<Complex>.Analyse(Admittance.Matrix);
         lu.Factor(Admittance.Matrix);
 
         twoPorts = new BranchAdmittance[branches.Count];
@@ -103,6 +107,9 @@ public sealed class SequenceNetwork
         column[bus] = Complex.One;
         lu.Solve(column);
     }
+
+    private static bool SamePattern(CscMatrix<Complex> a, CscMatrix<Complex> b) =>
+        a.Rows == b.Rows && a.ColPtr.AsSpan().SequenceEqual(b.ColPtr) && a.RowIdx.AsSpan(0, a.NonZeros).SequenceEqual(b.RowIdx.AsSpan(0, b.NonZeros));
 
     // A bus is fed when its island (over this sequence's series branches) holds any admittance to the reference.
     private static bool[] FedBuses(PerUnitModel seriesModel, int[] island, Complex[] earth, AdmittanceOptions options)

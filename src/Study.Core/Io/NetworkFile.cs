@@ -278,7 +278,7 @@ public static partial class NetworkFile
         "buses" => ElementFamily.Bus,
         "supplies" or "generators" => ElementFamily.Source,
         "lines" or "transformers" or "threeWindingTransformers" => ElementFamily.Branch,
-        "loads" or "shunts" => ElementFamily.LoadOrShunt,
+        "loads" or "shunts" or "motors" => ElementFamily.LoadOrShunt,
         "breakers" => ElementFamily.Breaker,
         "scenarios" => ElementFamily.Scenario,
         _ => null,

@@ -37,6 +37,9 @@ public sealed class ChooseCommandTests
         JsonElement Of(string id) => candidates.Single(c => c.GetProperty("id").GetString() == id);
         Assert.Contains(Of("CQ-25-8").GetProperty("reasons").EnumerateArray(), r => r.GetString()!.StartsWith("CB-CS11 breaking duty"));
         Assert.Contains(Of("CQ-10-6").GetProperty("reasons").EnumerateArray(), r => r.GetString()!.StartsWith("CQ-T1 loaded 1"));
+        // The board's feeder breaker is over its rating with the existing bank too: a note, never a reason against a candidate.
+        Assert.Contains(root.GetProperty("notes").EnumerateArray(), n => n.GetString()!.StartsWith("CB-CS11-T2 short-time duty is") && n.GetString()!.Contains("existing CQ-T1 as well"));
+        Assert.All(candidates, c => Assert.DoesNotContain(c.GetProperty("reasons").EnumerateArray(), r => r.GetString()!.StartsWith("CB-CS11-T2 short-time")));
     }
 
     [Fact]

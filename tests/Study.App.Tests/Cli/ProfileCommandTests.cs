@@ -37,7 +37,7 @@ public sealed class ProfileCommandTests
         Assert.Contains("the network lost", run.Out);
         Assert.Contains("CQ-T1:", run.Out);
         Assert.Equal(1 + 96, File.ReadAllLines(dir.File("steps.csv")).Length);
-        Assert.Equal(["step", "time", "hours", "converged", "lossMw", "WRB33.vPu", "GT1.position", "GT2.position", "UT-GE1.position", "CQ-T1.position"],
+        Assert.Equal(["step", "time", "hours", "converged", "lossMw", "WRB33.vPu", "GT1.position", "GT2.position", "UT-GE1.position", "CQ-T1.position", "CS-T2.position"],
             ReportChecks.CsvHeader(dir.File("steps.csv")));
         Assert.Equal(["id", "vMinPu", "vMaxPu", "hoursOutside"], ReportChecks.CsvHeader(dir.File("buses.csv")));
     }

@@ -98,10 +98,22 @@ public sealed class BankChoiceTests
         var stiff = Good("STIFF") with { Mva = 30, ZPercent = 4, LoadLossKw = 120 };
         BankChoiceResult r = Choose(Substation(), stiff);
         CandidateAssessment a = Only(r, "STIFF");
-        Assert.True(a.Reasons.Count == 1, $"duty {a.MaxDutyPercent}; notes: {string.Join("; ", r.Notes)}");
-        string reason = a.Reasons[0];
-        Assert.Matches(@"^CB-LV (breaking|making) duty \d+ %$", reason);
+        Assert.True(a.Reasons.Count > 0, $"duty {a.MaxDutyPercent}; notes: {string.Join("; ", r.Notes)}");
+        // One reason per check over its rating, and nothing but breaker checks.
+        Assert.All(a.Reasons, reason => Assert.Matches(@"^CB-LV (breaking|asymmetric breaking|making|short-time) duty \d+ %$", reason));
+        Assert.Contains(a.Reasons, reason => reason.StartsWith("CB-LV breaking duty"));
         Assert.True(a.MaxDutyPercent > 100);
+    }
+
+    [Fact]
+    public void A_breaker_over_its_rating_with_the_existing_bank_as_well_is_a_note_not_a_reason()
+    {
+        // A 3 kA breaker on the board falls short whatever bank feeds it: the choice cannot hinge on it.
+        BankChoiceResult r = Choose(Substation(breakerKa: 3), Good());
+        CandidateAssessment a = Only(r, "GOOD");
+        Assert.True(a.Feasible, string.Join("; ", a.Reasons));
+        Assert.True(a.MaxDutyPercent > 100);
+        Assert.Contains(r.Notes, n => n.StartsWith("CB-LV breaking duty is ") && n.EndsWith("with the existing T as well: its switchgear falls short whichever bank is bought"));
     }
 
     [Fact]

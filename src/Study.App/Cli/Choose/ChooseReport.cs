@@ -43,7 +43,7 @@ public static class ChooseReport
         string tap = best.OnLoad ? "its on-load changer regulating" : $"on tap {Labels.Position(best.BestTap ?? 0)}";
         yield return $"recommended: {best.Id}, {tap}, total owning cost {Fixed(best.TotalOwningCost, 0)} "
             + $"(price {Fixed(best.Price, 0)} + losses {Fixed(best.CapitalisedLosses, 0)})";
-        string duty = best.MaxDutyPercent is double d ? $"its breakers at {Fixed(d, 1)} % duty at most ({Text(best.MaxDutyBreaker)})" : "no breaker duty checked";
+        string duty = best.MaxDutyPercent is double d ? $"its breakers at {Fixed(d, 1)} % duty at most ({Text(best.MaxDutyBreaker)}{(d > 100 ? ", over with the existing bank as well: see Notes" : "")})" : "no breaker duty checked";
         yield return $"it keeps the watched buses {Fixed(best.MarginPu, 4)} pu inside the band at worst, {duty}, "
             + $"and loses {Fixed(best.EnergyLossMwh, 1)} MWh " + (r.ProfileSource is null ? "a year" : "over the profile");
         int feasible = r.Candidates.Count(c => c.Feasible);

@@ -23,7 +23,7 @@ internal static class GeneratorRules
         at.Positive("mva", g.Mva, "the rated power (MVA)");
         if (at.Kv("kv", g.Kv, zeroAllowed: false) && bus is { Kv: > 0 } && bus.Kv <= ElementScope.HighestPlausibleKv
             && Numbers.RelativeDifference(g.Kv!.Value, bus.Kv) > KvMismatch)
-            at.Warning("kv", $"rated kV {Numbers.Show(g.Kv.Value)} differs from bus {bus.Id} ({Numbers.Show(bus.Kv)} kV) " +
+            at.WarningUnlessUnitSlip(Plausibility.KvHint(g.Kv.Value, bus.Kv).Length > 0, "kv", $"rated kV {Numbers.Show(g.Kv.Value)} differs from bus {bus.Id} ({Numbers.Show(bus.Kv)} kV) " +
                 $"{Numbers.Difference(g.Kv.Value, bus.Kv)}: is a unit transformer missing, or a kV wrong?{Plausibility.KvHint(g.Kv.Value, bus.Kv)}");
         at.Positive("xdppPu", g.XdppPu, "the subtransient reactance x''d");
         at.Positive("x2Pu", g.X2Pu, "the negative-sequence reactance");

@@ -34,7 +34,7 @@ internal static class LineRules
             RequireBaseKv(at, "to", to);
         }
         if (from is { Kv: > 0 } && to is { Kv: > 0 } && Numbers.RelativeDifference(to.Kv, from.Kv) > KvMismatch)
-            at.Warning("to", $"joins bus {from.Id} ({Numbers.Show(from.Kv)} kV) and bus {to.Id} ({Numbers.Show(to.Kv)} kV): " +
+            at.WarningUnlessUnitSlip(Plausibility.KvHint(from.Kv, to.Kv).Length > 0, "to", $"joins bus {from.Id} ({Numbers.Show(from.Kv)} kV) and bus {to.Id} ({Numbers.Show(to.Kv)} kV): " +
                 $"a line joins buses of one voltage; is a transformer missing, or a bus kv wrong?{Plausibility.KvHint(from.Kv, to.Kv)}");
         if (line.Km is double length && double.IsFinite(length) && length > LongestKm)
             at.Warning("km", $"km {Numbers.Show(length)} is longer than any AC line (up to about {Numbers.Show(LongestKm)} km): is it in metres?");
