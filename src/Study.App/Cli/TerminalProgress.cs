@@ -23,6 +23,7 @@ public sealed class TerminalProgress : IProgress<double>, IDisposable
     private readonly Stopwatch clock = Stopwatch.StartNew();
     private readonly object gate = new();
     private TimeSpan? lastShown;
+    private bool finishShown;
     private int shownWidth;
 
     /// <param name="noun">What is counted, plural ("outages").</param>
@@ -46,9 +47,11 @@ public sealed class TerminalProgress : IProgress<double>, IDisposable
         lock (gate)
         {
             TimeSpan now = clock.Elapsed;
-            // A log gets its last line at the end too, once it has had a first.
-            bool due = lastShown is not TimeSpan last || now - last >= every || (value >= 1 && !inPlace);
-            if (now < Quiet || !due) return;
+            // A log gets a line at the end too.
+            bool finish = value >= 1 && !inPlace;
+            bool due = lastShown is not TimeSpan last || now - last >= every || (finish && !finishShown);
+            if (now < Quiet || !due || (finish && finishShown)) return;
+            finishShown |= finish;
             lastShown = now;
             string line = Line(value, now);
             if (inPlace)
@@ -73,7 +76,9 @@ public sealed class TerminalProgress : IProgress<double>, IDisposable
         double seconds = elapsed.TotalSeconds;
         if (done == 0 || seconds <= 0) return text;
         double rate = done / seconds;
-        text += rate >= 10 ? string.Format(culture, ", {0:N0} a second", rate) : string.Format(culture, ", {0:0.0} a second", rate);
+        text += rate >= 10 ? string.Format(culture, ", {0:N0} a second", rate)
+            : rate >= 1 ? string.Format(culture, ", {0:0.0} a second", rate)
+            : string.Format(culture, ", {0:0.#} a minute", rate * 60);
         if (done < total) text += ", about " + Duration((total - done) / rate) + " left";
         return text;
     }

@@ -39,7 +39,7 @@ public static partial class SlurmRun
     {
         CheckPassThrough(options);
         string folder = WorkFolder(options.WorkFolder);
-        string network = Path.Combine(folder, "network" + Path.GetExtension(networkPath));
+        string network = Path.Combine(folder, Path.GetFileName(networkPath));
         AtomicFile.WriteAllBytes(network, File.ReadAllBytes(networkPath));
         string script = Path.Combine(folder, Script);
         AtomicFile.WriteAllText(script, JobScript(folder, network, request, options));
