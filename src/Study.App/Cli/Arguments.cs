@@ -28,6 +28,10 @@ public sealed class Arguments
     public string? PositionalOrNull(int index) =>
         index < declaration.Positionals.Count ? parsed.GetValue(declaration.Positionals[index]) : null;
 
+    /// <summary>The words of the positional declared with <see cref="Declaration.PositionalMany"/>.</summary>
+    public IReadOnlyList<string> Remaining() =>
+        declaration.Remaining is { } rest ? parsed.GetValue(rest) ?? [] : [];
+
     public string? Value(string name) => Option(name) switch
     {
         Option<string?> single => parsed.GetValue(single),

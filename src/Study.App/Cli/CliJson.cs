@@ -6,6 +6,7 @@ using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
 using Study.App.Cli.Outages;
+using Study.App.Cli.Shards;
 using Study.App.Cli.Solve;
 using Study.App.Cli.Taps;
 
@@ -21,6 +22,7 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(TapsJson))]
 [JsonSerializable(typeof(OutagesJson))]
 [JsonSerializable(typeof(List<OutagesJson>))]
+[JsonSerializable(typeof(OutagePartJson))]
 [JsonSerializable(typeof(CompareJson))]
 [JsonSerializable(typeof(FaultJson))]
 [JsonSerializable(typeof(Profile.ProfileJson))]

@@ -73,6 +73,9 @@ public sealed class Declaration(SclCommand command)
 
     internal IReadOnlyList<Argument<string?>> Positionals => positionals;
 
+    /// <summary>The positional that takes every remaining word (PART...), when declared.</summary>
+    internal Argument<string[]>? Remaining { get; private set; }
+
     internal Option? Find(string name) => options.GetValueOrDefault(name);
 
     /// <summary>
@@ -92,6 +95,14 @@ public sealed class Declaration(SclCommand command)
         var argument = new Argument<string?>(name) { Description = description, Arity = required ? ArgumentArity.ExactlyOne : ArgumentArity.ZeroOrOne };
         positionals.Add(argument);
         command.Arguments.Add(argument);
+        return this;
+    }
+
+    /// <summary>A last positional that takes one or more words (study merge PART...).</summary>
+    public Declaration PositionalMany(string name, string description)
+    {
+        Remaining = new Argument<string[]>(name) { Description = description, Arity = ArgumentArity.OneOrMore };
+        command.Arguments.Add(Remaining);
         return this;
     }
 

@@ -8,6 +8,7 @@ using Study.App.Cli.Files;
 using Study.App.Cli.Outages;
 using Study.App.Cli.Profile;
 using Study.App.Cli.Scale;
+using Study.App.Cli.Shards;
 using Study.App.Cli.Solve;
 using Study.App.Cli.Start;
 using Study.App.Cli.Taps;
@@ -29,6 +30,7 @@ public static class StudyCommand
         new SolveCommand(),
         new TapsCommand(),
         new OutagesCommand(),
+        new MergeCommand(),
         new CompareCommand(),
         new FaultCommand(),
         new StartCommand(),
@@ -117,7 +119,8 @@ public static class StudyCommand
     private static string Plain(string message, Declaration declaration)
     {
         if (message.StartsWith("Required argument missing", StringComparison.Ordinal)
-            && declaration.Positionals.FirstOrDefault(p => p.Arity.MinimumNumberOfValues > 0) is { } first)
+            && declaration.Positionals.Where(p => p.Arity.MinimumNumberOfValues > 0).Cast<System.CommandLine.Argument>()
+                .Append(declaration.Remaining).FirstOrDefault(p => p is not null) is { } first)
             return $"missing {first.Name} ({first.Description})";
         return message.Replace("Unrecognized command or argument", "unknown argument or option");
     }

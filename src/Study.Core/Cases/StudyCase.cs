@@ -158,7 +158,7 @@ public sealed class StudyCase
         request.Validate();
         IReadOnlyList<OutageElement> elements = OutageElements.Pick(Network, request.ElementIds);
         var scenarioModels = Scenarios(request.Scenarios).Select(Model).ToList();
-        return OutageScreening.Run(scenarioModels, elements, LoadFlowOptions.Default, request.MaxParallelism, progress, cancel);
+        return OutageScreening.Run(scenarioModels, elements, LoadFlowOptions.Default, request.MaxParallelism, progress, cancel, request.Shard);
     }
 
     /// <summary>

@@ -33,7 +33,7 @@ public sealed class ProfileCommand : CliCommand
 
         StudyCase study = NetworkLoading.Open(path, context.Err);
         ProfileResult result;
-        using (TerminalProgress? progress = TerminalProgress.ForTerminal(context.Err, "profile"))
+        using (TerminalProgress? progress = TerminalProgress.ForStandardError(context.Err, "steps", profile.Steps.Count))
             result = study.Profile(request, profile, progress);
 
         ReportDocument report = ProfileReport.Build(path, study.Network, profilePath, result, request.Options);
