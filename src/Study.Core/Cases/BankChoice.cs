@@ -76,6 +76,7 @@ public sealed record CandidateAssessment
     internal IReadOnlyList<string> Notes { get; init; } = [];
 }
 
+/// <summary>Every candidate bank judged in place of one transformer: feasible ones first by total owning cost, the recommendation, and the notes that hold whichever bank is bought.</summary>
 public sealed record BankChoiceResult
 {
     public required string Transformer { get; init; }

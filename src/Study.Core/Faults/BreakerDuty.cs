@@ -1,6 +1,7 @@
 // A breaker's ratings against the currents it must break, make and carry for the faults at its bus.
 namespace Study.Core.Faults;
 
+/// <summary>The verdict of a breaker check against its rating.</summary>
 public enum DutyStatus
 {
     Ok,
@@ -71,6 +72,7 @@ public sealed record BreakerDuty
     public IReadOnlyList<DutyCheck> Checks { get; init; } = [];
 }
 
+/// <summary>The short names of duty statuses, checks and sides, as the reports and the JSON output spell them.</summary>
 public static class DutyStatusNames
 {
     public static string Code(this DutyStatus status) => status switch

@@ -1,6 +1,7 @@
 // How the driving voltage and the passive network of a fault calculation are chosen.
 namespace Study.Core.Faults;
 
+/// <summary>How the pre-fault voltage is taken: IEC 60909's equivalent voltage source, or the solved load flow.</summary>
 public enum FaultMethod
 {
     /// <summary>

@@ -3,6 +3,7 @@ using Study.Core.Units;
 
 namespace Study.Core.Faults;
 
+/// <summary>The fault levels at the studied buses, each breaker's duty, and the notes the engineer should see; <see cref="Failure"/> says why nothing was calculated.</summary>
 public sealed record FaultResult
 {
     /// <summary>

@@ -7,6 +7,7 @@ using Study.Core.Units;
 
 namespace Study.Core.Faults;
 
+/// <summary>The symmetrical-component sequence a network is built for.</summary>
 public enum Sequence
 {
     Positive,

@@ -1,6 +1,7 @@
 // Load-flow bus types, derived from what is connected to each bus.
 namespace Study.Core.LoadFlow;
 
+/// <summary>How the load flow treats a bus: its slack, PV or PQ role, or dead (no path to a source).</summary>
 public enum BusType
 {
     /// <summary>Fixed P and Q injection; unknowns V and angle.</summary>

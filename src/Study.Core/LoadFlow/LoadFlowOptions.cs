@@ -1,6 +1,7 @@
 // Options of a load-flow solve, and their defaults.
 namespace Study.Core.LoadFlow;
 
+/// <summary>Settings of the Newton-Raphson load flow: tolerance, iteration and control-round limits, the controls that act, and a warm start.</summary>
 public sealed record LoadFlowOptions
 {
     public static LoadFlowOptions Default { get; } = new();

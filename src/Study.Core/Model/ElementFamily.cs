@@ -28,6 +28,7 @@ public enum ElementKind
     Scenario,
 }
 
+/// <summary>Names of element kinds as messages and reports use them, and the kind of each network family.</summary>
 public static class ElementKinds
 {
     public static ElementFamily FamilyOf(ElementKind kind) => kind switch

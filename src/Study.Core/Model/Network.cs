@@ -81,8 +81,8 @@ public sealed record Network
     public SourceMap Source { get; init; } = SourceMap.Empty;
 
     /// <summary>True when no bus states its base kV: a per-unit-only case (several archive cases).</summary>
-    [JsonIgnore]
     /// <remarks>Null entries (which the validator reports) are skipped, so this never throws on a parsed file.</remarks>
+    [JsonIgnore]
     public bool IsPerUnitOnly => Buses.Any(b => b is not null) && Buses.All(b => b is null || b.Kv == 0);
 
     public Bus? FindBus(string id) => Buses.FirstOrDefault(b => b?.Id == id);

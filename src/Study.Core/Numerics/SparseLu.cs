@@ -142,7 +142,7 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
     /// Takes over the pivot sequence and the L and U patterns of <paramref name="source"/>, a factorisation
     /// of the same analysis, so the next <see cref="TryRefactor"/> replays them with new values exactly as
     /// <paramref name="source"/> would; with <paramref name="values"/> the factors' numbers too, so
-    /// <see cref="Solve"/> solves with <paramref name="source"/>'s matrix. The pattern is not copied when
+    /// <see cref="Solve(Span{T})"/> solves with <paramref name="source"/>'s matrix. The pattern is not copied when
     /// it is already the one in use here (taken over before, and neither solver has chosen pivots
     /// since). Returns false, leaving this solver unfactorised, when <paramref name="source"/> holds no
     /// factorisation.

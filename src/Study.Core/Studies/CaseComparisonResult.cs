@@ -42,6 +42,7 @@ public sealed record BranchChange
 /// <summary>A tap changer's final position in the two cases (null where the transformer is absent).</summary>
 public sealed record TapChange(string Id, int? BeforePosition, int? AfterPosition);
 
+/// <summary>Two solved cases side by side: per-bus voltage and per-branch flow changes, losses, tap moves, and the violations that appear or clear.</summary>
 public sealed record CaseComparisonResult
 {
     public bool BeforeConverged { get; init; }

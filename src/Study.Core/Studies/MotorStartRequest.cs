@@ -4,6 +4,7 @@ using Study.Core.Model;
 
 namespace Study.Core.Studies;
 
+/// <summary>The motors to start together and what to judge: the minimum terminal voltage, the watched buses, the scenario.</summary>
 public sealed record MotorStartRequest
 {
     /// <summary>Ids of the motors started together (all units of each).</summary>

@@ -15,6 +15,7 @@ public sealed record StartBus(string Id, double Kv, double BeforePu, double Duri
 public sealed record StartedMotor(string Id, string Bus, StarterMethod Starter, double TerminalPu, double CurrentPu, double? CurrentKa,
     double CurrentPerRated, bool CurrentLimited, bool Ok);
 
+/// <summary>The voltages at the instant motors start: per bus before, during and the dip, and each started motor against its minimum.</summary>
 public sealed record MotorStartResult
 {
     /// <summary>Why the study could not run (the pre-start load flow did not converge); null when it ran.</summary>

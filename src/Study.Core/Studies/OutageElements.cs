@@ -7,6 +7,7 @@ namespace Study.Core.Studies;
 /// <summary>A line or transformer that can be taken out: its id, its branch kind and the buses it joins.</summary>
 public sealed record OutageElement(string Id, BranchKind Kind, IReadOnlyList<string> Terminals);
 
+/// <summary>The lines and transformers an N-1 screening takes out, picked from a network in a fixed order.</summary>
 public static class OutageElements
 {
     /// <summary>Every in-service line, transformer and three-winding transformer, in file order.</summary>

@@ -1,6 +1,7 @@
 // What an outage screening is asked: which elements to take out, in which scenarios, on how many cores.
 namespace Study.Core.Studies;
 
+/// <summary>Which elements to take out, in which scenarios, and which slice of the outages when the screening is split into shards.</summary>
 public sealed record OutageScreeningRequest
 {
     /// <summary>Lines and transformers to take out one at a time; empty means every in-service one.</summary>

@@ -67,6 +67,7 @@ public sealed record ScenarioScreening
     public IReadOnlyList<OutageCase> Outages { get; init; } = [];
 }
 
+/// <summary>An N-1 screening: for each scenario the intact case and every outage with its islands, lost load, new violations and severity.</summary>
 public sealed record OutageScreeningResult
 {
     /// <summary>The elements taken out, in the order screened.</summary>

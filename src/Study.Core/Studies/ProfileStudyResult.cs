@@ -45,6 +45,7 @@ public sealed record ProfileSeries
     public IReadOnlyList<int[]> Positions { get; init; } = [];
 }
 
+/// <summary>A load flow per time step of a profile: energy delivered, consumed and lost, tap operations, and the hours each bus spends outside its band.</summary>
 public sealed record ProfileResult
 {
     public string? Scenario { get; init; }

@@ -3,6 +3,7 @@ using Study.Core.Model;
 
 namespace Study.Core.Studies;
 
+/// <summary>The transformer whose tap is studied, the buses to watch, the band and the scenarios, and whether other taps are held.</summary>
 public sealed record TapStudyRequest
 {
     public required string TransformerId { get; init; }

@@ -1,6 +1,7 @@
 // Result records of a tap study: every position in every scenario, and the positions to recommend.
 namespace Study.Core.Studies;
 
+/// <summary>A watched bus's solved voltage with the band it is held to (pu).</summary>
 public sealed record WatchedVoltage(string Bus, double VPu, double LowPu, double HighPu);
 
 /// <summary>One position solved in one scenario.</summary>
@@ -30,6 +31,7 @@ public sealed record TapStudyPoint
 /// <summary>A position that keeps every watched bus in band in every scenario, with its worst-case margin.</summary>
 public sealed record TapRecommendation(int Position, double MarginPu);
 
+/// <summary>Every tap position solved in every scenario, with the recommended positions ranked by their margin inside the band.</summary>
 public sealed record TapStudyResult
 {
     public required string Transformer { get; init; }
