@@ -422,7 +422,7 @@ internal static class HostileCases
             ["fault", demo, "--type", "bogus"], ["fault", demo, "--method", "bogus"], ["fault", demo, "--bus", "NOWHERE"],
             ["bench", "--sizes", "2000000000"], ["bench", "--sizes", "0"], ["bench", "--sizes", "-5"], ["bench", "--sizes", "abc"],
             ["bench", "--sizes", "1e9"], ["bench", "--sizes", "100", "--repeat", "0"], ["bench", "--sizes", "100", "--repeat", "1000000"],
-            ["generate", "--buses", "0", "-o", "x.json"], ["generate", "--buses", "3000000", "-o", "x.json"],
+            ["generate", "--buses", "0", "-o", "x.json"], ["generate", "--buses", "3000000", "-o", "x.json"], ["generate", "--buses", "200001", "-o", "x.json"],
             ["solve", demo, "--scenario", "nowhere"], ["taps", demo, "--transformer", "NOPE"], ["taps", demo, "--transformer", "CQ-T1", "--watch", "NOWHERE"],
             ["outages", demo, "--elements", "NOPE"], ["explain", demo, "NOPE"], ["solve", demo, "--no-such-option"], ["nonsense"],
             ["solve"], ["compare", demo], ["taps", demo], ["solve", demo, "extra"],

@@ -18,8 +18,8 @@ public sealed class BenchCommand : CliCommand
         .Value("repeat", "N", "solves per size, the best one reported (default 3)")
         .Flag("no-faults", "skip the all-bus three-phase fault scan");
 
-    /// <summary>The largest network `study generate` makes (2,000,000 buses): a bench beyond it would only exhaust memory.</summary>
-    private const int MostBuses = 2_000_000;
+    /// <summary>The largest network `study generate` makes.</summary>
+    private const int MostBuses = SyntheticGrid.MostBuses;
 
     /// <summary>More repeats than this measure nothing new; the best of a few is the figure reported.</summary>
     private const int MostRepeats = 100;

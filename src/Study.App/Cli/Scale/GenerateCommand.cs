@@ -17,7 +17,8 @@ public sealed class GenerateCommand : CliCommand
     protected override int Execute(Arguments args, CommandContext context)
     {
         int buses = args.Integer("buses") ?? throw new UsageException("--buses N is required");
-        if (buses < 2 || buses > 2_000_000) throw new UsageException("--buses must be between 2 and 2,000,000");
+        if (buses < 2 || buses > SyntheticGrid.MostBuses)
+            throw new UsageException($"--buses must be between 2 and {SyntheticGrid.MostBuses:N0} (the largest grid that is sure to solve from flat start)");
         string output = args.Value("output") ?? throw new UsageException("-o FILE (where to write the network) is required");
         int seed = args.Integer("seed") ?? 1;
         SyntheticCase c = SyntheticGrid.Generate(new SyntheticGridOptions { Buses = buses, Seed = seed });
