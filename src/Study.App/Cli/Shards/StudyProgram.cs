@@ -7,6 +7,8 @@ internal static class StudyProgram
     /// The command that runs this program: the native executable when it is one; else its launcher
     /// ("study", beside study.dll) when present; else the .NET host that runs this process with study.dll.
     /// </summary>
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("SingleFile", "IL3000",
+        Justification = "Location is empty in a native executable, and the process itself is then the command.")]
     public static IReadOnlyList<string> Invocation()
     {
         string? process = Environment.ProcessPath;
