@@ -45,7 +45,11 @@ public static class FaultStudy
 
         bool earth = false;
         foreach (FaultKind kind in request.Kinds) earth |= kind.InvolvesEarth();
-        var networks = SequenceNetworks.Build(model, request.Method, request.Level, earth, voltage, notes);
+        var networks = SequenceNetworks.Build(model, request.Method, request.Level,
+            earth && !request.LeaveOutEarthFaultsWithoutZeroSequence, voltage, notes);
+        // Only reached without a zero sequence when the request allows it: the other kinds still run.
+        IReadOnlyList<FaultKind> leftOut = earth && networks.Zero is null ? request.Kinds.Where(k => k.InvolvesEarth()).ToList() : [];
+        if (leftOut.Count > 0) request = request with { Kinds = request.Kinds.Where(k => !k.InvolvesEarth()).ToList() };
         var scan = new FaultScan(model, networks, request, preFault);
         var faults = new List<ShortCircuitLevel>(buses.Length * request.Kinds.Count);
         foreach (int bus in buses)
@@ -60,6 +64,8 @@ public static class FaultStudy
             Method = request.Method, Level = request.Level, Faults = faults,
             Breakers = BreakerDutyCheck.Evaluate(model.Breakers, faults),
             Notes = notes.Distinct().ToList(), PerUnitOnly = model.PerUnitOnly,
+            LeftOut = leftOut,
+            MissingZeroSequence = leftOut.Count == 0 ? [] : networks.ZeroProblems.Select(p => new MissingData(p.ElementId ?? "", p.Message)).ToList(),
         };
     }
 

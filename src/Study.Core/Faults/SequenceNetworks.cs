@@ -14,8 +14,9 @@ namespace Study.Core.Faults;
 public sealed class SequenceNetworks
 {
     private SequenceNetworks(SequenceNetwork positive, SequenceNetwork negative, SequenceNetwork? zero,
-        SequenceNetwork equivalentFrequency, int[] clockLag)
+        SequenceNetwork equivalentFrequency, int[] clockLag, IReadOnlyList<Model.InputException> zeroProblems)
     {
+        ZeroProblems = zeroProblems;
         Positive = positive;
         Negative = negative;
         Zero = zero;
@@ -25,8 +26,10 @@ public sealed class SequenceNetworks
 
     public SequenceNetwork Positive { get; }
     public SequenceNetwork Negative { get; }
-    /// <summary>Null when no earth fault was asked for and the zero-sequence data is incomplete.</summary>
+    /// <summary>Null when the zero-sequence data is incomplete (<see cref="ZeroProblems"/> says where).</summary>
     public SequenceNetwork? Zero { get; }
+    /// <summary>Each element whose zero-sequence data is missing or unreadable; empty when <see cref="Zero"/> was built.</summary>
+    public IReadOnlyList<Model.InputException> ZeroProblems { get; }
     /// <summary>Positive sequence at f_c for κ (IEC 60909-0 §8.1.3 method C).</summary>
     public SequenceNetwork EquivalentFrequency { get; }
     /// <summary>Per model branch: clock lag of its To end behind its From end, in 30° steps.</summary>
@@ -76,6 +79,6 @@ public sealed class SequenceNetworks
             var zeroOptions = new AdmittanceOptions { IncludeCharging = !iec, IncludeMagnetising = false, IncludeShunts = false };
             zero = new SequenceNetwork(Sequence.Zero, model, series, earth, atFrom, atTo, zeroOptions);
         }
-        return new SequenceNetworks(positive, negative, zero, equivalent, branches.ClockLag);
+        return new SequenceNetworks(positive, negative, zero, equivalent, branches.ClockLag, branches.ZeroProblems);
     }
 }

@@ -37,6 +37,7 @@ internal static class ThreeWindingRules
         PairImpedance(at, "zMlPercent", t.ZMlPercent);
         if (finite) StarBranches(at, t);
 
+        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: true);
         EarthingRules.Check(at, "hvNeutral", t.HvNeutral);
         EarthingRules.Check(at, "mvNeutral", t.MvNeutral);
         EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
