@@ -17,7 +17,7 @@ public static class OutageReport
     public static ReportDocument Build(string path, Network network, OutageScreeningResult r, LoadFlowOptions options)
     {
         string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0].Scenario is null
-            ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios.Select(s => s.Scenario));
+            ? "as entered" : "scenarios " + string.Join(", ", r.Scenarios.Select(s => s.Scenario));
         var doc = new ReportDocument($"Outage screening (N-1): {LoadFlowReport.Title(network, path)}");
         LoadFlowReport.AddInputs(doc, path, network, scenarios, options);
         doc.Input("elements taken out", $"{r.Elements.Count}: {string.Join(", ", r.Elements)}");
@@ -31,7 +31,7 @@ public static class OutageReport
 
     private static void AddScenario(ReportDocument doc, ScenarioScreening s)
     {
-        string name = s.Scenario ?? "loads as entered";
+        string name = s.Scenario ?? "as entered";
         doc.Heading(s.IntactConverged
             ? $"Scenario {name}: intact case {Fixed(s.IntactLoadMw, 2)} MW load, {Count(s.IntactViolations.Count, "violation")}"
             : $"Scenario {name}: the intact case does not converge ({s.IntactMessage}); every violation below counts as new");

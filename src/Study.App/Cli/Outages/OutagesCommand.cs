@@ -53,7 +53,7 @@ public sealed class OutagesCommand : CliCommand
 
         var failed = result.Scenarios.Where(s => !s.IntactConverged).ToList();
         foreach (ScenarioScreening s in failed)
-            context.Err.WriteLine($"error: {path}: the intact case ({s.Scenario ?? "loads as entered"}) did not converge: {s.IntactMessage}");
+            context.Err.WriteLine($"error: {path}: the intact case ({s.Scenario ?? "as entered"}) did not converge: {s.IntactMessage}");
         return failed.Count > 0 ? ExitCode.NoConvergence : ExitCode.Done;
     }
 }
