@@ -11,7 +11,7 @@ public static class CompareDialog
 {
     public static bool Run(IApplication app, CompareForm form)
     {
-        var dialog = new Dialog { Title = "Compare before and after", Width = Dim.Percent(90), Height = 17 };
+        var dialog = new Dialog { Title = "Compare before and after", Width = Dim.Percent(90), Height = 19 };
         string[] scenarioLabels = form.Scenarios.Select(CompareForm.ScenarioLabel).ToArray();
         var modeLabel = new Label { X = 0, Y = 0, Text = "Before" };
         var mode = new OptionSelector
@@ -45,6 +45,6 @@ public static class CompareDialog
             form.AfterScenario = form.Scenarios[Math.Clamp(after.Value ?? 0, 0, form.Scenarios.Count - 1)];
             form.BeforePath = file.Text;
         }
-        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error, mode);
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
     }
 }

@@ -7,11 +7,14 @@ namespace Study.App.Tui.Compare;
 /// <summary>The before and after cases, as chosen; <see cref="Build"/> checks the choice against the network.</summary>
 public sealed class CompareForm(Network network, string? activeScenario, string? path)
 {
-    /// <summary>True: the before case is another network file (the network before a change), solved in <see cref="AfterScenario"/> too.</summary>
-    public bool BeforeIsFile { get; set; }
-
-    /// <summary>The before network file when <see cref="BeforeIsFile"/>.</summary>
+    /// <summary>The before network file when <see cref="BeforeIsFile"/>: "x-before.study.json" beside "x.study.json" when there is one.</summary>
     public string BeforePath { get; set; } = SuggestedBefore(path);
+
+    /// <summary>
+    /// True: the before case is another network file (the network before a change), solved in
+    /// <see cref="AfterScenario"/> too. Chosen at first when a before file lies beside the network.
+    /// </summary>
+    public bool BeforeIsFile { get; set; } = File.Exists(SuggestedBefore(path));
 
     /// <summary>Scenario names; null is the case as entered.</summary>
     public string? BeforeScenario { get; set; } = activeScenario;

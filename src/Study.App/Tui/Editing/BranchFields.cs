@@ -16,9 +16,9 @@ public static class BranchFields
         Field.BusRef<Line>("From bus", e => e.From, (e, v) => e with { From = v }).Keyed("from"),
         Field.BusRef<Line>("To bus", e => e.To, (e, v) => e with { To = v }).Keyed("to"),
         Field.Optional<Line>("Length", "km", "", e => e.Km, (e, v) => e with { Km = v }).Keyed("km"),
-        .. SequenceFields("1", "Positive seq.", e => e.Z1, (e, z) => e with { Z1 = z }),
+        .. SequenceFields("1", "Z1 basis", e => e.Z1, (e, z) => e with { Z1 = z }),
         Field.Optional<Line>("Rating", "MVA", "none", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
-        .. SequenceFields("0", "Zero seq.", e => e.Z0, (e, z) => e with { Z0 = z }),
+        .. SequenceFields("0", "Z0 basis", e => e.Z0, (e, z) => e with { Z0 = z }),
         Field.Flag<Line>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
@@ -36,7 +36,7 @@ public static class BranchFields
         static double? Given(double v) => double.IsNaN(v) ? null : v;
         return
         [
-            Field.Named<Line, ImpedanceBasis>($"{title} per", Bases, ImpedanceBasis.PerKm, e => get(e)?.Per ?? ImpedanceBasis.PerKm,
+            Field.Named<Line, ImpedanceBasis>(title, Bases, ImpedanceBasis.PerKm, e => get(e)?.Per ?? ImpedanceBasis.PerKm,
                 (e, v) => Edit(e, z => z with { Per = v })).Keyed($"z{n}.per"),
             Field.Optional<Line>($"R{n}", "Ω(/km)|pu", "", e => Given(get(e)?.R ?? double.NaN),
                 (e, v) => Edit(e, z => z with { R = v ?? double.NaN })).Keyed($"z{n}.r"),

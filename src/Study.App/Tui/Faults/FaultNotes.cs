@@ -41,7 +41,7 @@ public static partial class FaultNotes
     {
         ElementKind? kind = KindOf(network, id);
         if (kind is not ElementKind k) return "";
-        var labels = ElementFields.For(k).Where(f => f.Key is not null && keys.Contains(f.Key)).Select(f => $"'{f.Header}'").Distinct().ToList();
+        var labels = ElementFields.For(k).Where(f => f.Key is not null && keys.Contains(f.Key)).Select(f => $"'{f.Name}'").Distinct().ToList();
         if (labels.Count == 0) return "";
         return $" — to change it: {ElementKinds.Label(k)} {id}, {(labels.Count == 1 ? "field" : "fields")} {string.Join(", ", labels)}"
             + $" (Enter on it in the {ElementFields.Plural(k)} table)";

@@ -10,6 +10,15 @@ public static class FaultTables
 {
     public static string[] LevelHeaders => FaultColumns.ScreenLevels(false).Headings;
 
+    /// <summary>The levels' columns for a result: without Z0 when the zero sequence was not built (it would read "open").</summary>
+    private static ColumnSpec<Study.Core.Faults.ShortCircuitLevel> LevelColumns(FaultResult r)
+    {
+        var spec = FaultColumns.ScreenLevels(r.PerUnitOnly);
+        if (r.LeftOut.Count == 0) return spec;
+        string[] keep = spec.Columns.Where(c => c.IsReadable && c.Header != "Z0").Select(c => c.Key ?? c.Header!).ToArray();
+        return spec.Select(keep);
+    }
+
     public static string[] BreakerHeaders => FaultColumns.ScreenBreakers.Headings;
 
     /// <summary>How the faults were calculated, then every note and missing datum in full (<see cref="FaultNotes"/>).</summary>
@@ -26,7 +35,7 @@ public static class FaultTables
     }
 
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>
-    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenLevels(r.PerUnitOnly), r.Faults);
+    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(LevelColumns(r), r.Faults);
 
     public static TextTableSource Breakers(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenBreakers, r.Breakers);
 }

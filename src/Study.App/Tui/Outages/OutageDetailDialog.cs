@@ -20,13 +20,14 @@ public static class OutageDetailDialog
     public static Dialog Build(OutageCase outage, LoadFlowResult after)
     {
         var dialog = new Dialog { Title = $"Outage of {outage.Element}", Width = Dim.Percent(96), Height = Dim.Percent(94) };
+        var body = new View { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
         var heading = new TextPane { X = 0, Y = 0, CanFocus = false, Content = OutageTables.Detail(outage) + "\n" + ResultTables.Highlights(after) };
-        heading.Height = Dim.Func(_ => Math.Min(6, TextPane.Wrap(heading.Content, Math.Max(1, heading.Viewport.Width)).Count));
+        // Sized from the body's width, never its own: a view sized by its own viewport does not settle in a dialog.
+        heading.Height = Dim.Func(_ => Math.Min(6, TextPane.Wrap(heading.Content, Math.Max(1, body.Viewport.Width)).Count));
         var buses = new ResultTable(ResultTables.BusHeaders) { X = 0, Y = Pos.Bottom(heading) };
         var branches = new ResultTable(ResultTables.BranchHeaders) { X = 0 };
         buses.Source = ResultTables.Buses(after);
         branches.Source = ResultTables.Branches(after);
-        var body = new View { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
         body.Add(heading, buses, branches);
         FocusSplit.Stack(body, buses, branches, () => body.Viewport.Height - heading.Frame.Height);
         dialog.Add(body);

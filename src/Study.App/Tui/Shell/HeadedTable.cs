@@ -16,6 +16,7 @@ public sealed class HeadedTable : View
     {
         Width = Dim.Fill();
         Height = Dim.Fill();
+        CanFocus = true;
         Table = new ResultTable(headers);
         heading.Height = Dim.Func(_ => Math.Min(MaxHeadingRows, HeadingRows));
         Table.Y = Pos.Bottom(heading);

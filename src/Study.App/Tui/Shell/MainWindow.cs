@@ -67,8 +67,10 @@ public sealed class MainWindow : Window
         Commands = new MainCommands(this);
 
         listFrame.Width = Dim.Func(_ => ListHidden ? 0 : app.Screen.Width >= 120 ? 28 : 22);
-        // A short screen keeps five table rows and gives the rest to the results (nine buses fit at 80×24).
-        tableFrame.Height = Dim.Func(_ => enlarged ? 0 : app.Screen.Height <= 30 ? 7 : app.Screen.Height * 42 / 100);
+        // A short screen keeps five table rows and gives the rest to the results (nine buses fit at 80×24);
+        // a tall one gives the table the rows its elements need, up to 42 %, and the results the rest.
+        tableFrame.Height = Dim.Func(_ => enlarged ? 0 : app.Screen.Height <= 30 ? 7
+            : Math.Clamp((Table?.Source.Rows ?? 0) + 4, 7, app.Screen.Height * 42 / 100));
         tableFrame.X = Pos.Right(listFrame);
         Results.X = Pos.Right(listFrame);
         Results.Y = Pos.Bottom(tableFrame);

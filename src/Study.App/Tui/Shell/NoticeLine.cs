@@ -16,7 +16,8 @@ public sealed class NoticeLine : View
     public NoticeLine()
     {
         Width = Dim.Fill();
-        Height = Dim.Func(_ => text is null ? 0 : TextPane.Wrap(text, Math.Max(1, Viewport.Width)).Count);
+        // Sized from the width of the view it sits in, not its own (a view sized by its own viewport need not settle).
+        Height = Dim.Func(_ => text is null ? 0 : TextPane.Wrap(text, Math.Max(1, SuperView?.Viewport.Width ?? 1)).Count);
         CanFocus = false;
     }
 

@@ -21,6 +21,7 @@ public sealed partial class ResultTable : TableView
     private int[] order = [];
     private int naturalWidth;
     private bool scrollPending;
+    private int fittedWidth = -1;
 
     public ResultTable(params string[] headers)
     {
@@ -164,7 +165,11 @@ public sealed partial class ResultTable : TableView
     {
         base.OnViewportChanged(e);
         if (Viewport.Width <= 0 || Viewport.Height <= 0) return;
-        if (FitLastColumn()) Update();
+        if (Viewport.Width != fittedWidth)
+        {
+            fittedWidth = Viewport.Width;
+            if (FitLastColumn()) Update();
+        }
         if (scrollPending)
         {
             scrollPending = false;

@@ -184,11 +184,12 @@ public sealed class ResultsView : FrameView
         return tables.FirstOrDefault(t => t.HasFocus) ?? tables.FirstOrDefault();
     }
 
-    /// <summary>Focus on the shown tab's first (or last) view.</summary>
+    /// <summary>Focus on the shown tab's first table (or its last view, coming back with Shift+Tab).</summary>
     public void FocusTab(bool last = false)
     {
         IReadOnlyList<View> views = current.Focusables();
-        (views.Count == 0 ? current : last ? views[^1] : views[0]).SetFocus();
+        View target = views.Count == 0 ? current : last ? views[^1] : views.FirstOrDefault(v => v is ResultTable) ?? views[0];
+        target.SetFocus();
     }
 
     /// <summary>Moves focus to the next view inside the shown tab; false when focus is on its last (first, going back).</summary>

@@ -51,7 +51,7 @@ public sealed record TapCurve(int MinPosition, int MaxPosition, double BandLowPu
         + $": lowest and highest watched bus at each position · ┄ band {Field.Format(Math.Round(BandLowPu, 4))}–{Field.Format(Math.Round(BandHighPu, 4))} pu";
 
     /// <summary>Tick steps the voltage axis may use: round numbers of pu.</summary>
-    private static readonly double[] Steps = [0.001, 0.002, 0.005, 0.01, 0.02, 0.025, 0.05, 0.1, 0.2, 0.5, 1];
+    private static readonly double[] Steps = [0.001, 0.002, 0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1];
 
     /// <summary>
     /// The voltage axis for <paramref name="rows"/> rows: the bottom at a multiple of a round step, a tick
@@ -61,8 +61,8 @@ public sealed record TapCurve(int MinPosition, int MaxPosition, double BandLowPu
     public (double Origin, double Step, int RowsPerTick) VoltageAxis(int rows)
     {
         rows = Math.Max(1, rows);
-        // Two rows per tick where the rows allow it; on a very short chart one will do.
-        foreach (int least in new[] { 2, 1 })
+        // Three rows per tick where the rows allow it (labels apart), then two; on a very short chart one will do.
+        foreach (int least in new[] { 3, 2, 1 })
             foreach (double step in Steps)
             {
                 double origin = Math.Floor(YLowPu / step + 1e-9) * step;

@@ -97,6 +97,6 @@ public sealed class TapCurveView : GraphView
         AxisX.ShowLabelsEvery = (uint)(positions <= 1 ? 1 : every);
         AxisY.Increment = (float)step;
         AxisY.ShowLabelsEvery = 1;
-        yDecimals = step >= 0.1 ? 1 : step >= 0.01 ? 2 : 3;
+        yDecimals = step >= 1 ? 0 : step >= 0.1 ? 1 : step >= 0.01 ? 2 : 3;
     }
 }

@@ -35,7 +35,7 @@ public sealed class TapStudyView : View
         table.Width = Dim.Func(_ => Wide ? Viewport.Width / 2 : Viewport.Width);
         // Stacked, the table takes no more rows than its positions need; the curve gets the rest.
         table.Height = Dim.Func(_ => Wide ? Math.Max(1, Viewport.Height - summary.Frame.Height)
-            : Math.Min(table.Source.Rows + 2, FocusSplit.TopRows(Viewport.Height - summary.Frame.Height, curvePane.HasFocus)));
+            : FocusSplit.TopRows(Viewport.Height - summary.Frame.Height, curvePane.HasFocus, FocusSplit.Need(table)));
         curvePane.X = Pos.Func(_ => Wide ? Viewport.Width / 2 + 1 : 0);
         curvePane.Y = Pos.Func(_ => Wide ? summary.Frame.Height : table.Frame.Bottom);
         curvePane.Width = Dim.Fill();
