@@ -28,6 +28,10 @@ public sealed class Arguments
     public string? PositionalOrNull(int index) =>
         index < declaration.Positionals.Count ? parsed.GetValue(declaration.Positionals[index]) : null;
 
+    /// <summary>The words of the positional declared with <see cref="Declaration.PositionalMany"/>.</summary>
+    public IReadOnlyList<string> Remaining() =>
+        declaration.Remaining is { } rest ? parsed.GetValue(rest) ?? [] : [];
+
     public string? Value(string name) => Option(name) switch
     {
         Option<string?> single => parsed.GetValue(single),
@@ -76,6 +80,44 @@ public sealed class Arguments
             && double.IsFinite(a) && double.IsFinite(b))
             return (a, b);
         throw new UsageException($"--{name} needs two numbers separated by a comma, got '{text}'");
+    }
+
+    /// <summary>
+    /// Refuses, before any work, an output that is one of the inputs (a report written over the network
+    /// file) or that two outputs share; the outputs' own paths are checked when written
+    /// (<see cref="Study.Core.Io.OutputTarget"/>).
+    /// </summary>
+    /// <exception cref="Study.Core.Model.InputException">An output names an input or another output.</exception>
+    internal void CheckOutputs()
+    {
+        var inputs = new List<string>();
+        var outputs = new List<(string What, string Path)>();
+        for (int i = 0; i < declaration.Positionals.Count; i++)
+        {
+            string name = declaration.Positionals[i].Name;
+            if (PositionalOrNull(i) is not string value) continue;
+            if (Declaration.InputNames.Contains(name)) inputs.Add(value);
+            else if (Declaration.OutputFileNames.Contains(name)) outputs.Add((name, value));
+        }
+        foreach (string name in Declaration.OutputFileNames.Concat(Declaration.OutputFolderNames))
+        {
+            if (declaration.Find(name) is not null && Value(name) is string value) outputs.Add(("--" + name, value));
+        }
+        for (int o = 0; o < outputs.Count; o++)
+        {
+            (string what, string path) = outputs[o];
+            foreach (string input in inputs)
+            {
+                if (Study.Core.Io.OutputTarget.Same(path, input))
+                    throw new Study.Core.Model.InputException(
+                        $"cannot write {path}: it is the input {input} ({what} names it); choose another name so the original is kept");
+            }
+            for (int other = 0; other < o; other++)
+            {
+                if (Study.Core.Io.OutputTarget.Same(path, outputs[other].Path))
+                    throw new Study.Core.Model.InputException($"cannot write {path}: {outputs[other].What} and {what} both name it; give each its own file");
+            }
+        }
     }
 
     private Option? Option(string name) =>

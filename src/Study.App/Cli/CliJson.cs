@@ -6,6 +6,7 @@ using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
 using Study.App.Cli.Outages;
+using Study.App.Cli.Shards;
 using Study.App.Cli.Solve;
 using Study.App.Cli.Taps;
 
@@ -21,8 +22,12 @@ namespace Study.App.Cli;
 [JsonSerializable(typeof(TapsJson))]
 [JsonSerializable(typeof(OutagesJson))]
 [JsonSerializable(typeof(List<OutagesJson>))]
+[JsonSerializable(typeof(OutagePartJson))]
 [JsonSerializable(typeof(CompareJson))]
 [JsonSerializable(typeof(FaultJson))]
+[JsonSerializable(typeof(Profile.ProfileJson))]
+[JsonSerializable(typeof(Choose.ChooseJson))]
+[JsonSerializable(typeof(Start.StartJson))]
 internal sealed partial class CliJsonContext : JsonSerializerContext;
 
 public static class CliJson

@@ -54,8 +54,12 @@ public abstract class CliCommand
         return command;
     }
 
-    internal int Run(ParseResult parsed, Declaration declaration, CommandContext context) =>
-        Execute(new Arguments(parsed, declaration), context);
+    internal int Run(ParseResult parsed, Declaration declaration, CommandContext context)
+    {
+        var args = new Arguments(parsed, declaration);
+        args.CheckOutputs();
+        return Execute(args, context);
+    }
 }
 
 /// <summary>
@@ -69,7 +73,21 @@ public sealed class Declaration(SclCommand command)
 
     internal IReadOnlyList<Argument<string?>> Positionals => positionals;
 
+    /// <summary>The positional that takes every remaining word (PART...), when declared.</summary>
+    internal Argument<string[]>? Remaining { get; private set; }
+
     internal Option? Find(string name) => options.GetValueOrDefault(name);
+
+    /// <summary>
+    /// The arguments that name files to read, and the options and positionals that name files or a folder
+    /// to write: every command spells them alike, so one check (<see cref="Arguments.CheckOutputs"/>)
+    /// keeps any output off any input and off another output.
+    /// </summary>
+    internal static readonly IReadOnlySet<string> InputNames = new HashSet<string>(StringComparer.Ordinal) { "FILE", "BEFORE", "AFTER", "IN" };
+
+    internal static readonly IReadOnlySet<string> OutputFileNames = new HashSet<string>(StringComparer.Ordinal) { "OUT", "markdown", "export-jacobian", "output" };
+
+    internal static readonly IReadOnlySet<string> OutputFolderNames = new HashSet<string>(StringComparer.Ordinal) { "csv" };
 
     /// <summary>A positional argument; <paramref name="required"/> false lets it be left out.</summary>
     public Declaration Positional(string name, string description, bool required = true)
@@ -77,6 +95,14 @@ public sealed class Declaration(SclCommand command)
         var argument = new Argument<string?>(name) { Description = description, Arity = required ? ArgumentArity.ExactlyOne : ArgumentArity.ZeroOrOne };
         positionals.Add(argument);
         command.Arguments.Add(argument);
+        return this;
+    }
+
+    /// <summary>A last positional that takes one or more words (study merge PART...).</summary>
+    public Declaration PositionalMany(string name, string description)
+    {
+        Remaining = new Argument<string[]>(name) { Description = description, Arity = ArgumentArity.OneOrMore };
+        command.Arguments.Add(Remaining);
         return this;
     }
 

@@ -1,12 +1,16 @@
 // Entry point of the command line: picks the subcommand, parses what it declared, runs it, turns failures into exit codes.
 using System.CommandLine;
 using System.CommandLine.Help;
+using Study.App.Cli.Choose;
 using Study.App.Cli.Compare;
 using Study.App.Cli.Faults;
 using Study.App.Cli.Files;
 using Study.App.Cli.Outages;
+using Study.App.Cli.Profile;
 using Study.App.Cli.Scale;
+using Study.App.Cli.Shards;
 using Study.App.Cli.Solve;
+using Study.App.Cli.Start;
 using Study.App.Cli.Taps;
 using Study.Core.Model;
 
@@ -26,8 +30,12 @@ public static class StudyCommand
         new SolveCommand(),
         new TapsCommand(),
         new OutagesCommand(),
+        new MergeCommand(),
         new CompareCommand(),
         new FaultCommand(),
+        new StartCommand(),
+        new ProfileCommand(),
+        new ChooseCommand(),
         new ExplainCommand(),
         new GenerateCommand(),
         new BenchCommand(),
@@ -35,6 +43,7 @@ public static class StudyCommand
 
     public static int Run(IReadOnlyList<string> args, CommandContext context)
     {
+        context = context with { Out = TerminalText.Wrap(context.Out), Err = TerminalText.Wrap(context.Err) };
         if (args.Count == 0 || args[0] is "help" or "--help" or "-h" or "-?")
         {
             string? topic = args.Skip(1).FirstOrDefault();
@@ -84,6 +93,17 @@ public static class StudyCommand
         }
     }
 
+    /// <summary>
+    /// `study` or `study FILE` with standard input or output not a terminal (a script, a pipe, CI): the
+    /// terminal UI would wait for keys that never come, so say what to run instead. Exit code 2.
+    /// </summary>
+    public static int NoTerminal(TextWriter err)
+    {
+        err.WriteLine("study: the terminal UI needs a terminal, and standard input or output is not one (a script, a pipe or CI?).");
+        err.WriteLine("From a script run a command instead, e.g. 'study check FILE' or 'study solve FILE'; 'study help' lists them.");
+        return ExitCode.InputError;
+    }
+
     public static bool IsCommand(string name) => name is "help" or "--help" or "-h" or "-?" || Find(name) is not null;
 
     private static CliCommand? Find(string name) => All.FirstOrDefault(c => c.Name == name);
@@ -99,7 +119,8 @@ public static class StudyCommand
     private static string Plain(string message, Declaration declaration)
     {
         if (message.StartsWith("Required argument missing", StringComparison.Ordinal)
-            && declaration.Positionals.FirstOrDefault(p => p.Arity.MinimumNumberOfValues > 0) is { } first)
+            && declaration.Positionals.Where(p => p.Arity.MinimumNumberOfValues > 0).Cast<System.CommandLine.Argument>()
+                .Append(declaration.Remaining).FirstOrDefault(p => p is not null) is { } first)
             return $"missing {first.Name} ({first.Description})";
         return message.Replace("Unrecognized command or argument", "unknown argument or option");
     }
@@ -107,7 +128,7 @@ public static class StudyCommand
     private static int Overview(CommandContext context)
     {
         TextWriter o = context.Out;
-        o.WriteLine("study: load flow, tap choice and fault levels on single-line networks");
+        o.WriteLine("study: load flow, tap choice, fault levels and motor starting on single-line networks");
         o.WriteLine();
         o.WriteLine("  study                 open the terminal UI on the bundled demo network");
         o.WriteLine("  study FILE            open the terminal UI on FILE");

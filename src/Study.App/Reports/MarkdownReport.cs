@@ -67,7 +67,7 @@ public static class MarkdownReport
         foreach (char c in text)
         {
             if (c is '\\' or '`' or '*' or '_' or '[' or ']' or '<' or '>' or '|' or '#') sb.Append('\\');
-            sb.Append(c);
+            ControlCharacters.Append(sb, c);
         }
         return sb.ToString();
     }

@@ -26,7 +26,9 @@ public static class TapStudyColumns
             .Integer("position", "position", null, p => p.Position)
             .Number("ratio", "ratio", null, p => p.Ratio, 4)
             .Text("scenario", "scenario", p => p.Scenario)
-            .CsvOnly("converged", p => p.Converged);
+            .CsvOnly("converged", p => p.Converged)
+            .CsvOnly("solvedFromFlatStart", p => p.SolvedFromFlatStart)
+            .CsvOnly("lowVoltage", p => p.LowVoltage);
         foreach (string bus in r.WatchBuses)
             spec.Number($"{bus}.vPu", bus, "pu", p => Watched(p, bus)?.VPu, 4,
                 reads: p => p.Converged && Watched(p, bus) is { } w ? Numbers.Fixed(w.VPu, 4) + Marks.Band(w.VPu, w.LowPu, w.HighPu) : Numbers.Blank);

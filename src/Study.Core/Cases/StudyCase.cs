@@ -158,7 +158,76 @@ public sealed class StudyCase
         request.Validate();
         IReadOnlyList<OutageElement> elements = OutageElements.Pick(Network, request.ElementIds);
         var scenarioModels = Scenarios(request.Scenarios).Select(Model).ToList();
-        return OutageScreening.Run(scenarioModels, elements, LoadFlowOptions.Default, request.MaxParallelism, progress, cancel);
+        return OutageScreening.Run(scenarioModels, elements, LoadFlowOptions.Default, request.MaxParallelism, progress, cancel, request.Shard);
+    }
+
+    /// <summary>
+    /// A load flow per step of a profile, with on-load tap changers acting between steps; the statistics of
+    /// the whole profile. The watched buses default to the buses the on-load changers regulate.
+    /// </summary>
+    /// <exception cref="InputException">The request is invalid, or a profile column or watched bus names nothing in the network.</exception>
+    public ProfileResult Profile(ProfileRequest request, LoadProfile profile, IProgress<double>? progress = null, CancellationToken cancel = default)
+    {
+        request.Validate();
+        if (profile.LoadIds is { } ids)
+            for (int k = 0; k < ids.Count; k++)
+                if (!Network.Loads.Any(l => l.Id == ids[k]) && !Network.Motors.Any(m => m.Id == ids[k]))
+                    throw new InputException($"column '{ids[k]}' names no load or motor of the network"
+                        + (IdHint(ids[k], Network.Loads.Select(l => l.Id).Concat(Network.Motors.Select(m => m.Id))) is { } near ? $": did you mean '{near}'?" : ""),
+                        profile.Source, 1, profile.LoadColumns?[k]);
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        PerUnitModel model = Model(Scenario(request.Scenario));
+        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses
+            : model.Taps.Where(t => t.RegulatedBus is not null).Select(t => model.Buses[t.RegulatedBus!.Value].Id).Distinct().ToList();
+        return ProfileStudy.Run(model, profile, watch, request.Options, progress, cancel);
+    }
+
+    /// <summary>The lv bus of a transformer and every bus reached from it through lines alone (the buses it feeds).</summary>
+    /// <exception cref="InputException">No in-service transformer has the id.</exception>
+    public IReadOnlyList<string> FedBuses(string transformerId)
+    {
+        PerUnitModel model = Model(null);
+        for (int k = 0; k < model.Branches.Count; k++)
+        {
+            PuBranch b = model.Branches[k];
+            if (b.Id == transformerId && b.Kind is BranchKind.Transformer or BranchKind.ThreeWindingTransformer)
+                return TapStudy.FedBuses(model, TapStudy.LvBus(model, k));
+        }
+        throw new InputException($"no transformer in service with id {transformerId}", elementId: transformerId);
+    }
+
+    /// <summary>
+    /// Each candidate bank in place of one transformer, held to the voltage band, loading, fault duty and
+    /// outages, then ranked by total owning cost. The annual energy comes from the profile when given.
+    /// </summary>
+    /// <exception cref="InputException">The request is invalid or names an unknown transformer, bus or scenario.</exception>
+    public BankChoiceResult Choose(BankChoiceRequest request, BankCandidates candidates, LoadProfile? profile = null,
+        CancellationToken cancel = default)
+    {
+        request.Validate();
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        Scenarios(request.Scenarios);
+        return BankChoice.Run(this, request, candidates, profile, cancel);
+    }
+
+    private static string? IdHint(string id, IEnumerable<string> known) => IdSuggestion.Closest(id, known);
+
+    /// <summary>The instant one or more motors start: every bus before and during, each started motor's terminal voltage.</summary>
+    /// <exception cref="InputException">The request is invalid, or names a motor or watched bus that is not in the network.</exception>
+    public MotorStartResult Start(MotorStartRequest request, CancellationToken cancel = default)
+    {
+        request.Validate();
+        foreach (string id in request.Motors)
+            if (!Network.Motors.Any(m => m.Id == id))
+                throw new InputException($"no motor with id {id}"
+                    + (IdHint(id, Network.Motors.Select(m => m.Id)) is { } near ? $": did you mean '{near}'?"
+                        : Network.Motors.Count == 0 ? " (the network has no motors)" : $" (motors: {string.Join(", ", Network.Motors.Select(m => m.Id))})"),
+                    elementId: id);
+        foreach (string bus in request.WatchBuses)
+            if (Network.FindBus(bus) is null) throw new InputException($"watched bus {bus} is not in the network", elementId: bus);
+        return MotorStart.Run(Model(Scenario(request.Scenario)), request, cancel);
     }
 
     /// <summary>
@@ -209,6 +278,21 @@ public sealed class StudyCase
         if (!Model(null).Taps.Any(t => t.Id == id))
             throw new InputException($"transformer {id} is out of service (or on an out-of-service bus): nothing to study", elementId: id);
     }
+}
+
+/// <summary>A profile study asked for: the scenario whose loads the profile scales, the buses to chart, the solver options.</summary>
+public sealed record ProfileRequest
+{
+    /// <summary>Scenario name; null for the loads as entered.</summary>
+    public string? Scenario { get; init; }
+
+    /// <summary>Buses whose voltage is kept for every step; empty means the buses the on-load tap changers regulate.</summary>
+    public IReadOnlyList<string> WatchBuses { get; init; } = [];
+
+    public LoadFlowOptions Options { get; init; } = LoadFlowOptions.Default;
+
+    /// <exception cref="InputException">An option is out of bounds.</exception>
+    public void Validate() => Options.Validate();
 }
 
 /// <summary>A load flow asked for: which scenario, with which solver options.</summary>

@@ -5,6 +5,15 @@ using Study.Core.Units;
 
 namespace Study.Core.Faults;
 
+/// <summary>How the symmetrical breaking current is figured.</summary>
+public enum BreakingCurrent
+{
+    /// <summary>I_b = I''k − Σ ΔU''_i/(c·U_n/√3)·(1 − μ_i·q_i)·I''k_i over the machines (IEC 60909-0 meshed networks); I''k for unbalanced faults.</summary>
+    Decay,
+    /// <summary>I_b = I''k everywhere.</summary>
+    Conservative,
+}
+
 /// <summary>A fault study request; the defaults give the all-bus IEC 60909 maximum scan for 3ph and slg.</summary>
 public sealed record FaultRequest
 {
@@ -46,8 +55,23 @@ public sealed record FaultRequest
     /// <summary>Each branch's current into the faulted bus.</summary>
     public bool IncludeContributions { get; init; } = true;
 
+    /// <summary>Minimum time delay t_min (relay plus opening) for the breaking current and its DC component, s; breakers with their own minTripS use theirs.</summary>
+    public double TMinS { get; init; } = 0.1;
+
+    /// <summary>Fault duration T_k for the thermal equivalent current, s.</summary>
+    public double DurationS { get; init; } = 1.0;
+
+    /// <summary>How the symmetrical breaking current I_b is taken.</summary>
+    public BreakingCurrent Breaking { get; init; } = BreakingCurrent.Decay;
+
+    /// <summary>Minimum levels: the end-of-fault temperature of line conductors, °C.</summary>
+    public double LineTemperatureC { get; init; } = 80;
+
+    /// <summary>Longest t_min and T_k accepted, s; the end-of-fault temperatures accepted, °C.</summary>
+    public const double MaxTimeS = 10, MinLineTemperatureC = -50, MaxLineTemperatureC = 400;
+
     /// <summary>Checks what can be checked without the network.</summary>
-    /// <exception cref="Model.InputException">No fault type, a fault impedance that is not finite or has negative resistance, or a blank bus id.</exception>
+    /// <exception cref="Model.InputException">No fault type, a fault impedance that is not finite or has negative resistance, a blank bus id, or a time or temperature out of bounds.</exception>
     public void Validate()
     {
         if (Kinds.Count == 0) throw new Model.InputException("no fault type asked for (3ph, slg, ll, dlg)");
@@ -56,6 +80,13 @@ public sealed record FaultRequest
             throw new Model.InputException("the fault impedance must be finite (R, X in ohm)");
         if (zf.Real < 0) throw new Model.InputException("the fault resistance must not be negative");
         if (Buses is { } buses && buses.Any(string.IsNullOrWhiteSpace)) throw new Model.InputException("a bus id to fault is blank");
+        if (!(TMinS > 0 && TMinS <= MaxTimeS))
+            throw new Model.InputException(FormattableString.Invariant($"the minimum time delay t_min {TMinS} s is outside 0..{MaxTimeS} s (0.1 s is the default)"));
+        if (!(DurationS > 0 && DurationS <= MaxTimeS))
+            throw new Model.InputException(FormattableString.Invariant($"the fault duration T_k {DurationS} s is outside 0..{MaxTimeS} s (1 s is the default)"));
+        if (!(LineTemperatureC >= MinLineTemperatureC && LineTemperatureC <= MaxLineTemperatureC))
+            throw new Model.InputException(FormattableString.Invariant(
+                $"the line temperature {LineTemperatureC} °C is outside {MinLineTemperatureC}..{MaxLineTemperatureC} °C (80 °C is the default)"));
         LoadFlowOptions?.Validate();
     }
 }

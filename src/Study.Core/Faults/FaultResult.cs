@@ -16,6 +16,15 @@ public sealed record FaultResult
 
     public FaultMethod Method { get; init; }
     public FaultLevel Level { get; init; }
+    /// <summary>The minimum time delay t_min the rows' breaking current and DC component are for, s.</summary>
+    public double TMinS { get; init; } = 0.1;
+    /// <summary>The fault duration T_k the thermal equivalent current is for, s.</summary>
+    public double TkS { get; init; } = 1.0;
+    public BreakingCurrent Breaking { get; init; }
+    /// <summary>Minimum levels: the temperature line resistances were taken at, °C; null for maximum levels.</summary>
+    public double? LineTemperatureC { get; init; }
+    /// <summary>The system frequency, Hz (the DC component and m depend on it).</summary>
+    public double FrequencyHz { get; init; } = 50;
     /// <summary>The caution every fault output carries (<see cref="FaultStudy.Caution"/>).</summary>
     public string Caution { get; init; } = FaultStudy.Caution;
     /// <summary>Every fault, by bus in network order, then by kind in the order asked.</summary>

@@ -14,7 +14,7 @@ namespace Study.Core.Faults;
 /// by superposition the fault changes bus voltages by ΔV_s = −Z_s[:, k]·I_s, and branch currents by the
 /// branch two-ports applied to ΔV. Column buffers are allocated once for the whole scan.
 /// </summary>
-internal sealed class FaultScan
+internal sealed partial class FaultScan
 {
     private static readonly double Sqrt2 = Math.Sqrt(2), Sqrt3 = Math.Sqrt(3);
     private readonly PerUnitModel model;
@@ -50,6 +50,7 @@ internal sealed class FaultScan
         neighbours = new (int, int)[n][];
         for (int i = 0; i < n; i++) neighbours[i] = NeighboursOf(i);
         unbalanced = request.Kinds.Any(k => k != FaultKind.ThreePhase);
+        InitialiseDuty();
         rowsRead = new int[n][];
         for (int i = 0; i < n; i++) rowsRead[i] = RowsRead(i);
     }
@@ -71,6 +72,7 @@ internal sealed class FaultScan
                 Add(model.Branches[b].To);
             }
         }
+        foreach (int end in BreakerBranchEnds(bus)) Add(end);
         return rows.ToArray();
     }
 
@@ -90,6 +92,7 @@ internal sealed class FaultScan
         Complex? zk1 = networks.Positive.IsFed(bus) ? z1[bus] : null;
         Complex? zk2 = networks.Negative.IsFed(bus) ? z2[bus] : null;
         Complex? zk0 = zero is not null && zero.IsFed(bus) ? z0[bus] : null;
+        PrepareDuty(bus);
 
         Complex zf = Complex.Zero;
         if (request.FaultImpedanceOhm != Complex.Zero)
@@ -117,7 +120,7 @@ internal sealed class FaultScan
             SequenceValues current = SymmetricalComponents.FaultCurrents(kind, e, zk1, zk2, zk0, zf);
             double ik = current.LargestPhaseMagnitude;
             double earth = (3 * current.Zero).Magnitude;
-            into.Add(new ShortCircuitLevel
+            into.Add(WithDuty(bus, e, zf, current, zk0, new ShortCircuitLevel
             {
                 Bus = pu.Id, Kv = kv, Kind = kind, VoltageFactor = preFault is null ? c : e.Magnitude,
                 IkPu = ik, IkKa = ik * baseKa, EarthCurrentPu = earth, EarthCurrentKa = earth * baseKa,
@@ -125,34 +128,55 @@ internal sealed class FaultScan
                 ROverX = rOverX, XOverR = xOverR, KappaROverX = kappaROverX, Kappa = kappa,
                 IpPu = kappa * Sqrt2 * ik, IpKa = kappa * Sqrt2 * ik * baseKa,
                 Z1Pu = zk1, Z2Pu = zk2, Z0Pu = zk0, Z1Ohm = Ohm(zk1), Z2Ohm = Ohm(zk2), Z0Ohm = Ohm(zk0),
-                Voltages = request.IncludeVoltages ? Voltages(bus, e, current) : [],
+                Voltages = request.IncludeVoltages ? Voltages(bus, kind, e, current) : [],
                 Contributions = request.IncludeContributions ? Contributions(bus, current, baseKa) : [],
-            });
+            }));
         }
     }
 
-    private PhaseVoltages[] Voltages(int bus, Complex e, SequenceValues current)
+    private PhaseVoltages[] Voltages(int bus, FaultKind kind, Complex e, SequenceValues current)
     {
         var list = neighbours[bus];
         var result = new PhaseVoltages[list.Length + 1];
-        result[0] = VoltageAt(bus, 0, true, e, current);
-        for (int i = 0; i < list.Length; i++) result[i + 1] = VoltageAt(list[i].Bus, list[i].Lag, false, e, current);
+        Complex? floating = FloatingZeroSequence(bus, kind, e, current);
+        result[0] = VoltageAt(bus, bus, 0, true, e, current, floating);
+        for (int i = 0; i < list.Length; i++) result[i + 1] = VoltageAt(list[i].Bus, bus, list[i].Lag, false, e, current, floating);
         return result;
+    }
+
+    /// <summary>
+    /// An earth fault at a bus with no zero-sequence path to earth (an isolated-neutral part of the network)
+    /// draws no current, yet it ties a phase to earth: the neutral shifts. V0 then follows from the fault
+    /// condition, not from −Z0·I0 with I0 = 0 (symmetrical components; any protection text on isolated
+    /// neutral systems): line-to-earth on phase a, V_a = 0, so V0 = −(V1 + V2); double line-to-earth on b
+    /// and c, V_b = V_c = 0, so V0 = −(a²·V1 + a·V2), which equals V1 = V2 there. The whole part of the
+    /// network joined to the bus in the zero sequence shifts with it. Null when the bus has a path to earth.
+    /// </summary>
+    private Complex? FloatingZeroSequence(int bus, FaultKind kind, Complex e, SequenceValues current)
+    {
+        if (!kind.InvolvesEarth() || networks.Zero is not { } zero || zero.IsFed(bus)) return null;
+        Complex pre = preFault is null ? e : preFault[bus];
+        Complex v1 = pre - z1[bus] * current.Positive;
+        Complex v2 = -z2[bus] * current.Negative;
+        Complex a = SequenceValues.A;
+        return kind == FaultKind.LineToEarth ? -(v1 + v2) : -(a * a * v1 + a * v2);
     }
 
     // Sequence voltages come from networks without the vector groups' clock shifts; across a transformer
     // the positive sequence lags by the clock angle and the negative sequence leads by it (IEC 60076-1).
-    private PhaseVoltages VoltageAt(int i, int lag, bool faulted, Complex e, SequenceValues current)
+    private PhaseVoltages VoltageAt(int i, int faultedBus, int lag, bool faulted, Complex e, SequenceValues current, Complex? floating)
     {
         Complex pre = preFault is null ? e : preFault[i];
         Complex v1 = pre - z1[i] * current.Positive;
         Complex v2 = -z2[i] * current.Negative;
-        Complex v0 = networks.Zero is null ? Complex.Zero : -z0[i] * current.Zero;
+        Complex v0 = networks.Zero is not { } zero ? Complex.Zero
+            : floating is Complex shift ? (zero.Joined(i, faultedBus) ? shift : Complex.Zero)
+            : -z0[i] * current.Zero;
         if (lag != 0)
         {
-            Complex shift = Complex.FromPolarCoordinates(1, -lag * Math.PI / 6);
-            v1 *= shift;
-            v2 *= Complex.Conjugate(shift);
+            Complex turn = Complex.FromPolarCoordinates(1, -lag * Math.PI / 6);
+            v1 *= turn;
+            v2 *= Complex.Conjugate(turn);
         }
         var v = new SequenceValues(v0, v1, v2);
         return new PhaseVoltages(model.Buses[i].Id, faulted, v.PhaseA.Magnitude, v.PhaseB.Magnitude, v.PhaseC.Magnitude);

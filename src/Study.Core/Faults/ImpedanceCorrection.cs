@@ -8,8 +8,8 @@ namespace Study.Core.Faults;
 /// and zero-sequence impedances of the element (not to neutral earthing impedances). Formulas from
 /// IEC 60909-0:2016 (from memory): K_T = 0.95·c_max/(1 + 0.6·x_T) (§6.3.3) with x_T the relative
 /// reactance on the transformer's own rating; K_G = (U_n/U_rG)·c_max/(1 + x''d·sin φ_rG) (§6.6.1).
-/// Every transformer is treated as a network transformer (a generator and its unit transformer are
-/// corrected separately by K_G and K_T, not by the power-station-unit factor K_S).
+/// A generator with its own unit transformer takes the power-station-unit factors instead
+/// (<see cref="PowerStationUnits"/>); every other transformer is a network transformer.
 /// </summary>
 public static class ImpedanceCorrection
 {

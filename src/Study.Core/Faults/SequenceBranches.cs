@@ -26,7 +26,10 @@ internal sealed class SequenceBranches
     /// True: missing zero-sequence data is an input error (the first problem is thrown); false: the
     /// zero sequence is left out and <see cref="ZeroProblems"/> lists every element that lacks it.
     /// </param>
-    public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes)
+    /// <param name="transformerFactors">Power-station units: the factor that replaces K_T, by branch index.</param>
+    /// <param name="lineResistanceC">Minimum levels: lines at this conductor temperature (their data at 20 °C); null to take the data as given.</param>
+    public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes,
+        IReadOnlyDictionary<int, double>? transformerFactors = null, double? lineResistanceC = null)
     {
         var kThree = new Dictionary<string, (double Hv, double Mv, double Lv)>();
         bool iec = method == FaultMethod.Iec60909;
@@ -49,7 +52,9 @@ internal sealed class SequenceBranches
             VectorGroup? group = null;
             if (b.Kind == BranchKind.Transformer)
             {
-                if (iec)
+                if (iec && transformerFactors is not null && transformerFactors.TryGetValue(k, out double unit))
+                    kT = unit;
+                else if (iec)
                 {
                     double? corrected = ImpedanceCorrection.TwoWinding(b.Rating, model.Buses[b.To].BaseKv);
                     if (corrected is double value) kT = value;
@@ -71,18 +76,20 @@ internal sealed class SequenceBranches
                 if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
             }
 
-            pos[k] = b with { Z = b.Z * kT, Ratio = ratio };
-            neg[k] = pos[k] with { ShiftRad = -b.ShiftRad };
-            eqf[k] = pos[k] with
-            {
-                Z = Faults.EquivalentFrequency.Series(pos[k].Z, fcOverF),
-                B = b.B * fcOverF,
-                MagnetisingY = Faults.EquivalentFrequency.Parallel(b.MagnetisingY, fcOverF),
-            };
+            // R_L = [1 + α·(θ_e − 20 °C)]·R_L20 for minimum levels (IEC 60909-0, from memory; DEVELOPERS.md, Algorithms).
+            double rFactor = lineResistanceC is double theta && b.ResistanceCoefficient is double alpha
+                ? ConductorResistance.Factor(alpha, theta) : 1.0;
+            if (rFactor != 1.0) b = b with { Z = new Complex(b.Z.Real * rFactor, b.Z.Imaginary), Z0 = b.Z0 is Complex l0 ? new Complex(l0.Real * rFactor, l0.Imaginary) : null };
+            // The vector group's displacement enters through the clock lag of the phase voltages, not the networks.
+            pos[k] = b with { Z = b.Z * kT, Ratio = ratio, ShiftRad = b.ShiftRad - b.GroupShiftRad, GroupShiftRad = 0 };
+            neg[k] = pos[k] with { ShiftRad = -pos[k].ShiftRad };
+            eqf[k] = AtFrequency(pos[k], fcOverF);
             zero[k] = ZeroPath(model, pos[k], b, kT, group, zeroNotes, zeroProblems);
         }
         if (zeroProblems.Count == 0) notes.AddRange(zeroNotes);
 
+        if (lineResistanceC is double c && model.Branches.Any(b => b.ResistanceCoefficient is not null))
+            notes.Add(FormattableString.Invariant($"minimum levels: line resistance at {c:0.#} °C, the end-of-fault temperature (the data taken at 20 °C)"));
         if (zeroProblems.Count > 0 && zeroRequired) throw zeroProblems[0];
         return new SequenceBranches
         {
@@ -90,6 +97,14 @@ internal sealed class SequenceBranches
             Zero = zeroProblems.Count == 0 ? zero : null, ZeroProblems = zeroProblems,
         };
     }
+
+    /// <summary>A positive-sequence branch with its reactances at f_c/f (IEC 60909-0 §8.1.3 method C): the charging scales with f, the magnetising inversely.</summary>
+    public static PuBranch AtFrequency(PuBranch positive, double fcOverF) => positive with
+    {
+        Z = Faults.EquivalentFrequency.Series(positive.Z, fcOverF),
+        B = positive.B * fcOverF,
+        MagnetisingY = Faults.EquivalentFrequency.Parallel(positive.MagnetisingY, fcOverF),
+    };
 
     /// <summary>The vector group, or null with a problem added (once per element: a three-winding bank has three star branches).</summary>
     private static VectorGroup? GroupOf(PuBranch b, bool threeWinding, List<InputException> problems)
@@ -122,6 +137,12 @@ internal sealed class SequenceBranches
                 Complex z0 = (b.Z0 ?? b.Z) * kT;
                 Complex? hv = Neutral(b.Id, "hv", group.Hv, w.HvNeutral, notes);
                 Complex? lv = Neutral(b.Id, "lv", group.Lv, w.LvNeutral, notes);
+                // A bank of parallel units has one neutral impedance per unit: the bank's is Z_N/units (DEVELOPERS.md, Per-unit rules).
+                if (b.Units > 1)
+                {
+                    hv /= b.Units;
+                    lv /= b.Units;
+                }
                 return ZeroSequencePath.TwoWinding(corrected, z0, group, hv, lv);
             }
             case BranchKind.ThreeWindingTransformer when group is not null:

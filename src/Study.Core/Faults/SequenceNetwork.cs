@@ -26,28 +26,34 @@ public sealed class SequenceNetwork
 {
     private readonly SparseLu<Complex> lu;
     private readonly bool[] fed;
+    private readonly int[] island;
     private readonly BranchAdmittance[] twoPorts;
     private Complex[] scratch = new Complex[16];
 
     /// <param name="model">The model whose buses are used; its branches are replaced by <paramref name="branches"/>.</param>
     /// <param name="branches">Every branch of the model for this sequence, aligned with model.Branches; null where it carries nothing in series.</param>
     /// <param name="earth">Per-bus admittance to the reference (sources, earthing, loads as impedances); overwritten.</param>
+    /// <param name="samePattern">A network whose symbolic analysis to reuse when its matrix has this one's pattern (the
+    /// same network at another frequency, or without some sources): the ordering is done once.</param>
     internal SequenceNetwork(Sequence sequence, PerUnitModel model, IReadOnlyList<PuBranch?> branches, Complex[] earth,
-        Complex[] earthAtFrom, Complex[] earthAtTo, AdmittanceOptions options)
+        Complex[] earthAtFrom, Complex[] earthAtTo, AdmittanceOptions options, SequenceNetwork? samePattern = null)
     {
         Sequence = sequence;
         int n = model.Buses.Count;
         var series = new List<PuBranch>();
         foreach (PuBranch? b in branches) if (b is not null) series.Add(b);
         var seriesModel = model with { Branches = series };
-        fed = FedBuses(seriesModel, earth, options);
+        island = Islands.Label(seriesModel);
+        fed = FedBuses(seriesModel, island, earth, options);
         for (int i = 0; i < n; i++) if (!fed[i]) earth[i] += Complex.One;
 
         // Branches inside an unfed part carry no current; leaving them out makes those rows the identity.
         var live = new List<PuBranch>(series.Count);
         foreach (PuBranch b in series) if (fed[b.From]) live.Add(b);
         Admittance = new AdmittanceMatrix(model with { Branches = live }, options, earth);
-        lu = SparseLu<Complex>.Analyse(Admittance.Matrix);
+        lu = samePattern is not null && SamePattern(samePattern.Admittance.Matrix, Admittance.Matrix)
+            ? new SparseLu<Complex>(samePattern.lu.Symbolic)
+            : SparseLu<Complex>.Analyse(Admittance.Matrix);
         lu.Factor(Admittance.Matrix);
 
         twoPorts = new BranchAdmittance[branches.Count];
@@ -72,6 +78,9 @@ public sealed class SequenceNetwork
 
     /// <summary>True when bus i reaches a source (positive, negative) or earth (zero) in this sequence.</summary>
     public bool IsFed(int bus) => fed[bus];
+
+    /// <summary>True when two buses are joined by this sequence's series branches (one island of the sequence network).</summary>
+    public bool Joined(int a, int b) => island[a] == island[b];
 
     /// <summary>
     /// The two-port of model branch k in this sequence, including a transformer's earthing at either
@@ -99,8 +108,11 @@ public sealed class SequenceNetwork
         lu.Solve(column);
     }
 
+    private static bool SamePattern(CscMatrix<Complex> a, CscMatrix<Complex> b) =>
+        a.Rows == b.Rows && a.ColPtr.AsSpan().SequenceEqual(b.ColPtr) && a.RowIdx.AsSpan(0, a.NonZeros).SequenceEqual(b.RowIdx.AsSpan(0, b.NonZeros));
+
     // A bus is fed when its island (over this sequence's series branches) holds any admittance to the reference.
-    private static bool[] FedBuses(PerUnitModel seriesModel, Complex[] earth, AdmittanceOptions options)
+    private static bool[] FedBuses(PerUnitModel seriesModel, int[] island, Complex[] earth, AdmittanceOptions options)
     {
         int n = seriesModel.Buses.Count;
         var toEarth = new bool[n];
@@ -112,7 +124,6 @@ public sealed class SequenceNetwork
             if (options.IncludeCharging && b.B != 0) toEarth[b.From] = toEarth[b.To] = true;
             if (options.IncludeMagnetising && b.MagnetisingY != Complex.Zero) toEarth[b.From] = true;
         }
-        int[] island = Islands.Label(seriesModel);
         var fedIsland = new bool[n];
         for (int i = 0; i < n; i++) if (toEarth[i]) fedIsland[island[i]] = true;
         var fed = new bool[n];

@@ -54,6 +54,30 @@ public sealed record ShortCircuitLevel
     public double IpPu { get; init; }
     public double? IpKa { get; init; }
 
+    /// <summary>Symmetrical breaking current I_b at the study's t_min (IEC 60909-0 §9.1; I''k for unbalanced faults).</summary>
+    public double IbPu { get; init; }
+    public double? IbKa { get; init; }
+    /// <summary>DC component i_DC at t_min, with <see cref="DcROverX"/> by the equivalent frequency for f·t_min.</summary>
+    public double IdcPu { get; init; }
+    public double? IdcKa { get; init; }
+    public double DcROverX { get; init; }
+    /// <summary>Asymmetric breaking current √(I_b² + i_DC²).</summary>
+    public double IbAsymPu { get; init; }
+    public double? IbAsymKa { get; init; }
+    /// <summary>Steady-state current I_k: I''k with the motors left out (far from generators).</summary>
+    public double IkSteadyPu { get; init; }
+    public double? IkSteadyKa { get; init; }
+    /// <summary>Thermal equivalent current I_th = I''k·√(m + n) for the study's fault duration, and its m.</summary>
+    public double IthPu { get; init; }
+    public double? IthKa { get; init; }
+    public double ThermalM { get; init; }
+
+    /// <summary>Three-phase faults: each generator's and motor's own current and the share that decays (empty otherwise).</summary>
+    public IReadOnlyList<MachineContribution> Machines { get; init; } = [];
+
+    /// <summary>The currents each breaker at this bus carries for this fault (its duty is the largest over the fault types).</summary>
+    public IReadOnlyList<BreakerCurrents> BreakerCurrents { get; init; } = [];
+
     public Complex? Z1Pu { get; init; }
     public Complex? Z2Pu { get; init; }
     public Complex? Z0Pu { get; init; }

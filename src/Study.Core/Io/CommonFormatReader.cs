@@ -95,8 +95,18 @@ public static class CommonFormatReader
                 Source = fileName is null ? null : Path.GetFileName(fileName),
                 Buses = published,
             },
-            Source = new SourceMap(fileName, lines),
+            Source = new SourceMap(fileName, lines) { Notes = Notes(file, fileName) },
         };
+    }
+
+    /// <summary>What was skipped before the title card, so a wrong MVA base is never read in silence.</summary>
+    private static IReadOnlyList<string> Notes(CaseFile file, string? fileName)
+    {
+        if (file.SkippedLines.Count == 0) return [];
+        IReadOnlyList<int> skipped = file.SkippedLines;
+        string which = skipped.Count == 1 ? $"line {skipped[0]}" : $"{skipped.Count} lines ({skipped[0]} to {skipped[^1]})";
+        return [$"{fileName ?? "the case"}: {which} before the title card skipped; the title card (MVA base {file.Title.BaseMva.ToString(CultureInfo.InvariantCulture)}) " +
+            "is the line just before BUS DATA FOLLOWS"];
     }
 
     private static string Id(int busNumber) => busNumber.ToString(CultureInfo.InvariantCulture);
@@ -126,6 +136,8 @@ public static class CommonFormatReader
             PMw = card.GenMw,
             QMvar = card.GenMvar,
             VSet = vSet,
+            // The slack bus's angle in the file is the reference angle of the published solution.
+            AngleDeg = mode == GeneratorMode.Slack && card.FinalAngleDeg != 0 ? card.FinalAngleDeg : null,
             QMaxMvar = limitsStated ? card.MaxLimit : null,
             QMinMvar = limitsStated ? card.MinLimit : null,
         };
@@ -164,7 +176,7 @@ public static class CommonFormatReader
         XPu = card.XPu,
         BPu = card.BPu != 0 ? card.BPu : null,
         Ratio = card.FinalRatio != 0 ? card.FinalRatio : 1.0,
-        PhaseShiftDeg = card.FinalAngleDeg,
+        PhaseShiftDeg = card.FinalAngleDeg != 0 ? card.FinalAngleDeg : null,
         RatingMva = card.Rating1Mva != 0 ? card.Rating1Mva : null,
     };
 

@@ -33,17 +33,10 @@ public static partial class NetworkFile
         $"{file ?? "the file"} is a version 1 network file; 'study convert {file ?? "IN"} OUT' writes it as version {Network.CurrentVersion}";
 
     /// <summary>Reads a network file or an IEEE Common Format case from disk.</summary>
+    /// <exception cref="InputException">The path, the file or its content cannot be used (see <see cref="InputFile"/>), or the content is not a network.</exception>
     public static Network Read(string path)
     {
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException($"cannot read the file: {e.Message}", path);
-        }
+        byte[] bytes = InputFile.ReadAllBytes(path);
         // A UTF-8 network file goes to the JSON reader as the bytes it is: decoding it to a string and
         // encoding it back cost about a tenth of the read of a 5 MB file. Anything else (a Common
         // Format case, a UTF-16 file) is decoded as File.ReadAllText would.
@@ -95,9 +88,19 @@ public static partial class NetworkFile
             throw new InputException($"'format' is '{network.Format}', expected '{Network.FormatName}'", fileName, line, column);
         }
         IReadOnlyList<string> notes = version == 1 ? [Version1Note(fileName)] : [];
+        if (version == 1) network = Version1Transformers(network);
         // The lines are only needed for messages: found on the first look-up, so a clean file skips the scan.
         return network with { Version = Network.CurrentVersion, Source = new SourceMap(fileName, () => ElementLines(utf8)) { Notes = notes } };
     }
+
+    /// <summary>
+    /// Version 1 files carry "phaseShiftDeg": 0 on every transformer, because its writer always wrote the
+    /// key; a 0 there says nothing, so it reads as not given and the vector group sets the displacement.
+    /// </summary>
+    private static Network Version1Transformers(Network network) =>
+        network.Transformers.Any(t => t is { PhaseShiftDeg: 0 })
+            ? network with { Transformers = network.Transformers.Select(t => t is { PhaseShiftDeg: 0 } ? t with { PhaseShiftDeg = null } : t).ToList() }
+            : network;
 
     /// <summary>
     /// The top-level "version" (the current one when absent), read before the rest because the keys of
@@ -133,7 +136,7 @@ public static partial class NetworkFile
     }
 
     /// <summary>Rewrites a serializer message into one that names the key, the line and the column.</summary>
-    private static InputException Translate(JsonException e, string? fileName)
+    internal static InputException Translate(JsonException e, string? fileName)
     {
         int? line = e.LineNumber is long l ? (int)l + 1 : null;
         int? column = e.BytePositionInLine is long c ? (int)c + 1 : null;
@@ -141,19 +144,56 @@ public static partial class NetworkFile
         string message = e.Message;
         Match unknown = UnknownKey().Match(message);
         Match missing = MissingKeys().Match(message);
+        Match duplicate = DuplicateKey().Match(message);
         if (unknown.Success)
             message = $"unknown key '{unknown.Groups[1].Value}' at {path}";
         else if (missing.Success)
             message = $"missing required key(s) {missing.Groups[1].Value} in the object ending at {path}";
+        else if (duplicate.Success)
+            message = $"key '{duplicate.Groups[1].Value}' is given twice in one object (at {ParentOf(path)}): "
+                + "the reader would keep only one of the values; remove the other";
         else if (message.Contains("could not be converted", StringComparison.Ordinal))
             message = $"wrong type of value at {path}";
         else
-        {
-            int cut = message.IndexOf(" Path:", StringComparison.Ordinal);
-            message = $"JSON syntax: {(cut > 0 ? message[..cut] : message)}";
-        }
+            message = $"JSON syntax: {PlainSyntax(message)}";
         return new InputException(message, fileName, line, column);
     }
+
+    /// <summary>
+    /// The reader's own sentence about the syntax, without what only a programmer could act on: the
+    /// path suffix, reader options, buffer flags and .NET type names.
+    /// </summary>
+    private static string PlainSyntax(string message)
+    {
+        string m = message;
+        int cut = m.IndexOf(" Path:", StringComparison.Ordinal);
+        if (cut > 0) m = m[..cut];
+        if (m.Contains("trailing comma", StringComparison.Ordinal))
+            return "a comma before a closing bracket or brace (JSON allows none there)";
+        if (m.Contains("maximum configured depth", StringComparison.Ordinal))
+            return "objects and arrays are nested deeper than a network file ever is (64 levels)";
+        if (m.Contains("does not contain any JSON tokens", StringComparison.Ordinal))
+            return "the text ends before any value";
+        m = ReaderHint().Replace(m, "").Trim();
+        m = TypeName().Replace(m, "");
+        return m.Length == 0 ? "the text is not valid JSON" : m;
+    }
+
+    /// <summary>"$.buses[0]" for "$.buses[0].id": the object that holds the key.</summary>
+    private static string ParentOf(string path)
+    {
+        int dot = path.LastIndexOf('.');
+        return dot > 1 ? path[..dot] : "$";
+    }
+
+    [GeneratedRegex(@"\s*(Change the reader options\.|[^.]*\bisFinalBlock\b[^.]*\.|[^.]*JsonSerializerOptions[^.]*\.|[^.]*JsonReaderOptions[^.]*\.)")]
+    private static partial Regex ReaderHint();
+
+    [GeneratedRegex(@"\s*(of|for) type '[^']*'")]
+    private static partial Regex TypeName();
+
+    [GeneratedRegex("Duplicate property '([^']*)'")]
+    private static partial Regex DuplicateKey();
 
     [GeneratedRegex("The JSON property '([^']*)' could not be mapped")]
     private static partial Regex UnknownKey();
@@ -238,7 +278,7 @@ public static partial class NetworkFile
         "buses" => ElementFamily.Bus,
         "supplies" or "generators" => ElementFamily.Source,
         "lines" or "transformers" or "threeWindingTransformers" => ElementFamily.Branch,
-        "loads" or "shunts" => ElementFamily.LoadOrShunt,
+        "loads" or "shunts" or "motors" => ElementFamily.LoadOrShunt,
         "breakers" => ElementFamily.Breaker,
         "scenarios" => ElementFamily.Scenario,
         _ => null,

@@ -14,12 +14,13 @@ namespace Study.Core.Io;
     AllowTrailingCommas = false,
     AllowDuplicateProperties = false,
     ReadCommentHandling = System.Text.Json.JsonCommentHandling.Skip,
-    Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapWinding>), typeof(NamedEnumConverter<ImpedanceBasis>)])]
+    Converters = [typeof(NamedEnumConverter<GeneratorMode>), typeof(NamedEnumConverter<TapWinding>), typeof(NamedEnumConverter<ImpedanceBasis>),
+        typeof(NamedEnumConverter<StarterMethod>), typeof(NamedEnumConverter<ConductorMaterial>)])]
 [JsonSerializable(typeof(Network))]
 internal sealed partial class NetworkJsonContext : JsonSerializerContext;
 
 /// <summary>
-/// The file's enum keys ("mode", "winding", "per") by name, as the model's names are spelled; a number is a
+/// The file's enum keys ("mode", "winding", "per", "method", "conductor") by name, as the model's names are spelled; a number is a
 /// wrong type of value, not an index into the enum (which would also admit values with no meaning).
 /// </summary>
 internal sealed class NamedEnumConverter<TEnum>() : JsonStringEnumConverter<TEnum>(namingPolicy: null, allowIntegerValues: false)

@@ -14,6 +14,7 @@ internal sealed class ControlLoops
     private readonly BusSchedule schedule;
     private readonly NewtonRaphson nr;
     private readonly LoadFlowOptions options;
+    private readonly PerUnitModel original;
     private readonly bool[] voltageControlled;
     private readonly double[] fixedQ;
     private readonly int[] positions;
@@ -24,21 +25,40 @@ internal sealed class ControlLoops
     public ControlLoops(PerUnitModel model, BusSchedule schedule, NewtonRaphson nr, LoadFlowOptions options)
     {
         Model = model;
+        original = model;
         this.schedule = schedule;
         this.nr = nr;
         this.options = options;
         int n = model.Buses.Count;
         voltageControlled = new bool[n];
-        fixedQ = (double[])schedule.QGen.Clone();
-        for (int i = 0; i < n; i++) voltageControlled[i] = schedule.Type[i] == BusType.Pv;
-        positions = model.Taps.Select(t => t.Position).ToArray();
+        fixedQ = new double[n];
+        positions = new int[model.Taps.Count];
         lastMove = new int[positions.Length];
         reversals = new int[positions.Length];
         AtLimit = new TapLimit?[positions.Length];
+        groups = [];
+        Reset(null);
+    }
+
+    /// <summary>
+    /// Back to the state of construction for the schedule as it now stands (types and set points
+    /// restored, dead buses marked): taps at the model's positions, no move made. Taps on the branches
+    /// marked in <paramref name="open"/> (taken out by an outage) do not regulate.
+    /// </summary>
+    public void Reset(bool[]? open)
+    {
+        Model = original;
+        for (int i = 0; i < voltageControlled.Length; i++) voltageControlled[i] = schedule.Type[i] == BusType.Pv;
+        Array.Copy(schedule.QGen, fixedQ, fixedQ.Length);
+        for (int k = 0; k < positions.Length; k++) positions[k] = original.Taps[k].Position;
+        Array.Clear(lastMove);
+        Array.Clear(reversals);
+        Array.Clear(AtLimit);
         // Parallel banks regulating one bus form one group and move together, so they cannot hunt
         // against each other.
-        groups = model.Taps.Select((t, k) => (t, k)).Where(x => x.t.RegulatedBus is not null)
-            .GroupBy(x => x.t.RegulatedBus!.Value).Select(g => g.Select(x => x.k).ToArray()).ToList();
+        groups.Clear();
+        groups.AddRange(original.Taps.Select((t, k) => (t, k)).Where(x => x.t.RegulatedBus is not null && open?[x.t.Branch] != true)
+            .GroupBy(x => x.t.RegulatedBus!.Value).Select(g => g.Select(x => x.k).ToArray()));
     }
 
     /// <summary>The model with the current tap positions.</summary>
@@ -108,7 +128,8 @@ internal sealed class ControlLoops
             foreach (int k in group) AtLimit[k] = null;
             if (v >= low && v <= high) continue;
             double stepPu = Math.Abs(lead.PercentPerStep) / 100.0;
-            int wantedSteps = (int)Math.Round((lead.VTarget - v) / Math.Max(stepPu * v, 1e-9), MidpointRounding.AwayFromZero);
+            // Clamped before the cast: a zero step would otherwise ask for more steps than an int holds.
+            int wantedSteps = (int)Math.Clamp(Math.Round((lead.VTarget - v) / Math.Max(stepPu * v, 1e-9), MidpointRounding.AwayFromZero), -1e6, 1e6);
             if (wantedSteps == 0) wantedSteps = v < low ? 1 : -1;
             foreach (int k in group)
             {
@@ -118,7 +139,7 @@ internal sealed class ControlLoops
                 // A tap that has reversed twice is hunting across a band narrower than its step:
                 // from then on it moves one step at a time and stops at the next reversal.
                 if (reversals[k] >= 2) delta = Math.Sign(delta) == -Math.Sign(lastMove[k]) ? 0 : Math.Sign(delta);
-                int target = Math.Clamp(positions[k] + delta, tap.Min, tap.Max);
+                int target = (int)Math.Clamp((long)positions[k] + delta, tap.Min, tap.Max);
                 if (target == positions[k])
                 {
                     if (delta != 0) AtLimit[k] = delta > 0 ? TapLimit.Highest : TapLimit.Lowest;

@@ -98,16 +98,10 @@ internal static class LoadFlowResults
     /// <summary>Flows at both ends from the branch two-port; loss = sum of the two end injections.</summary>
     internal static BranchResult Flow(PerUnitModel model, PuBranch b, Complex[] v, AdmittanceOptions options)
     {
-        var y = BranchAdmittance.Of(b, options.IncludeCharging, options.IncludeMagnetising);
-        Complex vf = v[b.From], vt = v[b.To];
-        Complex iFrom = y.Yff * vf + y.Yft * vt;
-        Complex iTo = y.Ytf * vf + y.Ytt * vt;
-        Complex sFrom = vf * Complex.Conjugate(iFrom) * model.BaseMva;
-        Complex sTo = vt * Complex.Conjugate(iTo) * model.BaseMva;
+        var (iFrom, iTo, sFrom, sTo) = EndFlows(model, b, v, options);
         PuBus from = model.Buses[b.From], to = model.Buses[b.To];
         double? CurrentA(PuBus bus, Complex i) =>
             bus.BaseKv > 0 ? i.Magnitude * model.BaseMva / (Math.Sqrt(3) * bus.BaseKv) * 1000 : null;
-        double sMax = Math.Max(sFrom.Magnitude, sTo.Magnitude);
         return new BranchResult
         {
             Id = b.Winding is null ? b.Id : $"{b.Id}/{b.Winding}",
@@ -118,8 +112,31 @@ internal static class LoadFlowResults
             IFromA = CurrentA(from, iFrom), IToA = CurrentA(to, iTo),
             LossMw = sFrom.Real + sTo.Real, LossMvar = sFrom.Imaginary + sTo.Imaginary,
             RatingMva = b.RatingMva,
-            LoadingPercent = b.RatingMva is > 0 ? sMax / b.RatingMva.Value * 100 : null,
+            LoadingPercent = Loading(b, sFrom, sTo),
         };
+    }
+
+    /// <summary>The larger end MVA over the rating, percent; null without a rating (the same figure as <see cref="Flow"/>'s).</summary>
+    internal static double? LoadingPercent(PerUnitModel model, PuBranch b, Complex[] v, AdmittanceOptions options)
+    {
+        if (b.RatingMva is not > 0) return null;
+        var (_, _, sFrom, sTo) = EndFlows(model, b, v, options);
+        return Loading(b, sFrom, sTo);
+    }
+
+    private static double? Loading(PuBranch b, Complex sFrom, Complex sTo) =>
+        b.RatingMva is > 0 ? Math.Max(sFrom.Magnitude, sTo.Magnitude) / b.RatingMva.Value * 100 : null;
+
+    /// <summary>Currents (pu) and powers (MVA) into the branch at both ends.</summary>
+    private static (Complex IFrom, Complex ITo, Complex SFrom, Complex STo) EndFlows(PerUnitModel model, PuBranch b, Complex[] v, AdmittanceOptions options)
+    {
+        var y = BranchAdmittance.Of(b, options.IncludeCharging, options.IncludeMagnetising);
+        Complex vf = v[b.From], vt = v[b.To];
+        Complex iFrom = y.Yff * vf + y.Yft * vt;
+        Complex iTo = y.Ytf * vf + y.Ytt * vt;
+        Complex sFrom = vf * Complex.Conjugate(iFrom) * model.BaseMva;
+        Complex sTo = vt * Complex.Conjugate(iTo) * model.BaseMva;
+        return (iFrom, iTo, sFrom, sTo);
     }
 
     /// <summary>The element kind a branch's violation names.</summary>

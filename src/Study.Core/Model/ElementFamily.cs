@@ -1,7 +1,7 @@
 // The families within which element ids must be unique (README, Network files).
 namespace Study.Core.Model;
 
-/// <summary>Id namespaces: ids are unique within a family.</summary>
+/// <summary>Id namespaces: ids are unique within a family (motors share the family of loads and shunts).</summary>
 public enum ElementFamily
 {
     Bus,
@@ -23,6 +23,7 @@ public enum ElementKind
     Line,
     Transformer,
     ThreeWindingTransformer,
+    Motor,
     Breaker,
     Scenario,
 }
@@ -34,7 +35,7 @@ public static class ElementKinds
         ElementKind.Bus => ElementFamily.Bus,
         ElementKind.Supply or ElementKind.Generator => ElementFamily.Source,
         ElementKind.Line or ElementKind.Transformer or ElementKind.ThreeWindingTransformer => ElementFamily.Branch,
-        ElementKind.Load or ElementKind.Shunt => ElementFamily.LoadOrShunt,
+        ElementKind.Load or ElementKind.Shunt or ElementKind.Motor => ElementFamily.LoadOrShunt,
         ElementKind.Breaker => ElementFamily.Breaker,
         _ => ElementFamily.Scenario,
     };

@@ -41,6 +41,10 @@ public sealed record Generator
     public double PMw { get; init; }
     public double QMvar { get; init; }
     public double VSet { get; init; } = 1.0;
+
+    /// <summary>The angle a slack generator holds, degrees: the island's reference angle (0 when not given).</summary>
+    public double? AngleDeg { get; init; }
+
     public double? QMinMvar { get; init; }
     public double? QMaxMvar { get; init; }
 

@@ -21,6 +21,16 @@ public enum ImpedanceBasis
     PerUnit,
 }
 
+/// <summary>The conductor material, for the resistance at the end-of-fault temperature.</summary>
+[JsonConverter(typeof(JsonStringEnumConverter<ConductorMaterial>))]
+public enum ConductorMaterial
+{
+    [JsonStringEnumMemberName("copper")]
+    Copper,
+    [JsonStringEnumMemberName("aluminium")]
+    Aluminium,
+}
+
 /// <summary>One sequence of a line (z1: positive, z0: zero): series r + jx and shunt charging b, on one basis.</summary>
 public sealed record SequenceImpedance
 {
@@ -81,5 +91,8 @@ public sealed record Line
 
     /// <summary>Thermal rating, MVA; null when not given (no loading is reported).</summary>
     public double? RatingMva { get; init; }
+
+    /// <summary>Conductor material (its temperature coefficient of resistance); null when not given.</summary>
+    public ConductorMaterial? Conductor { get; init; }
     public bool InService { get; init; } = true;
 }

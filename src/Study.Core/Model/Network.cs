@@ -28,6 +28,7 @@ public sealed record Network
         IReadOnlyList<Line>? lines = null,
         IReadOnlyList<Transformer>? transformers = null,
         IReadOnlyList<ThreeWindingTransformer>? threeWindingTransformers = null,
+        IReadOnlyList<Motor>? motors = null,
         IReadOnlyList<Breaker>? breakers = null,
         IReadOnlyList<Scenario>? scenarios = null,
         PublishedSolution? publishedSolution = null)
@@ -45,6 +46,7 @@ public sealed record Network
         Lines = lines ?? [];
         Transformers = transformers ?? [];
         ThreeWindingTransformers = threeWindingTransformers ?? [];
+        Motors = motors ?? [];
         Breakers = breakers ?? [];
         Scenarios = scenarios ?? [];
         PublishedSolution = publishedSolution;
@@ -67,6 +69,7 @@ public sealed record Network
     public IReadOnlyList<Line> Lines { get; init; } = [];
     public IReadOnlyList<Transformer> Transformers { get; init; } = [];
     public IReadOnlyList<ThreeWindingTransformer> ThreeWindingTransformers { get; init; } = [];
+    public IReadOnlyList<Motor> Motors { get; init; } = [];
     public IReadOnlyList<Breaker> Breakers { get; init; } = [];
     public IReadOnlyList<Scenario> Scenarios { get; init; } = [];
 

@@ -43,7 +43,11 @@ public sealed record Transformer
     public Earthing? HvNeutral { get; init; }
     public Earthing? LvNeutral { get; init; }
     public TapChanger? Tap { get; init; }
-    public double PhaseShiftDeg { get; init; }
+    /// <summary>
+    /// Phase displacement φ of the ideal ratio t·e^{jφ}:1 in degrees (lv lags hv by φ). When not given it is
+    /// the vector group's clock number × 30°; given, it replaces that (a phase-shifting transformer, say).
+    /// </summary>
+    public double? PhaseShiftDeg { get; init; }
     public NoLoadLoss? NoLoad { get; init; }
     public double? RatingMva { get; init; }
 

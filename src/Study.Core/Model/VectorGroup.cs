@@ -33,6 +33,8 @@ public sealed record VectorGroup(WindingConnection Hv, WindingConnection? Mv, in
             int start = pos;
             while (pos < s.Length && char.IsAsciiDigit(s[pos])) pos++;
             if (pos == start) throw Bad(text, elementId, "a clock number (0 to 11) must follow each lower-voltage winding");
+            // Two digits at most: a longer run is outside 0 to 11 whatever it says (and might not fit an int).
+            if (pos - start > 2) throw Bad(text, elementId, $"clock number {s[start..pos]} is outside 0 to 11");
             int clock = int.Parse(s.AsSpan(start, pos - start), CultureInfo.InvariantCulture);
             if (clock > 11) throw Bad(text, elementId, $"clock number {clock} is outside 0 to 11");
             others.Add((c, clock));
@@ -43,6 +45,19 @@ public sealed record VectorGroup(WindingConnection Hv, WindingConnection? Mv, in
         return threeWinding
             ? new VectorGroup(hv, others[0].Connection, others[0].Clock, others[1].Connection, others[1].Clock)
             : new VectorGroup(hv, null, 0, others[0].Connection, others[0].Clock);
+    }
+
+    /// <summary>Degrees by which the lv winding lags the hv winding, in (−180, 180]: clock × 30° (Dyn11: −30°, lv leads by 30°).</summary>
+    public double LvLagDeg => LagDeg(LvClock);
+
+    /// <summary>Degrees by which the mv winding of a three-winding unit lags the hv winding, in (−180, 180].</summary>
+    public double MvLagDeg => LagDeg(MvClock);
+
+    /// <summary>A clock number as an angle of lag in (−180, 180]: each hour is 30° (IEC 60076-1, from memory).</summary>
+    public static double LagDeg(int clock)
+    {
+        int degrees = clock % 12 * 30;
+        return degrees > 180 ? degrees - 360 : degrees;
     }
 
     private static WindingConnection Letters(string s, ref int pos, bool upper, string text, string elementId)

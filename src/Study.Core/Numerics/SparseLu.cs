@@ -34,6 +34,12 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
     private int[] factoredRowIdx = [];
     private bool factorised;
     private int factorCount;           // factorisations so far, to tell when the Uᵀ copy is stale
+    private bool onDiagonal;           // the factors have diagonal pivots on the analysis's pattern
+    private SparseLu<T>? adoptedFrom;  // the solver whose pivots were last taken over, and when (AdoptPivots)
+    private int adoptedAt, ownAtAdoption;
+    // Factor columns refactorised since the values were last taken over (AdoptPivots), unless all may have been.
+    private readonly List<int> changedSinceAdoption = [];
+    private bool allChangedSinceAdoption = true;
 
     public SparseLu(LuSymbolic symbolic, LuOptions? options = null)
     {
@@ -132,10 +138,79 @@ public sealed partial class SparseLu<T> where T : INumberBase<T>
         return FactorFresh(a, out singularColumn);
     }
 
+    /// <summary>
+    /// Takes over the pivot sequence and the L and U patterns of <paramref name="source"/>, a factorisation
+    /// of the same analysis, so the next <see cref="TryRefactor"/> replays them with new values exactly as
+    /// <paramref name="source"/> would; with <paramref name="values"/> the factors' numbers too, so
+    /// <see cref="Solve"/> solves with <paramref name="source"/>'s matrix. The pattern is not copied when
+    /// it is already the one in use here (taken over before, and neither solver has chosen pivots
+    /// since). Returns false, leaving this solver unfactorised, when <paramref name="source"/> holds no
+    /// factorisation.
+    /// </summary>
+    /// <exception cref="ArgumentException">The two solvers do not share one symbolic analysis.</exception>
+    public bool AdoptPivots(SparseLu<T> source, bool values = false)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        if (!ReferenceEquals(source.Symbolic, Symbolic))
+            throw new ArgumentException("pivots can be taken over only from a factorisation of the same analysis.", nameof(source));
+        if (!source.factorised)
+        {
+            factorised = false;
+            return false;
+        }
+        bool samePattern = factorised && ReferenceEquals(adoptedFrom, source) && adoptedAt == source.PivotingFactorisations
+            && ownAtAdoption == PivotingFactorisations;
+        if (!samePattern) AdoptPattern(source);
+        if (values)
+        {
+            if (!samePattern || allChangedSinceAdoption)
+            {
+                Array.Copy(source.lx, lx, lp[n]);
+                Array.Copy(source.ux, ux, up[n]);
+            }
+            else
+            {
+                foreach (int k in changedSinceAdoption)
+                {
+                    Array.Copy(source.lx, lp[k], lx, lp[k], lp[k + 1] - lp[k]);
+                    Array.Copy(source.ux, up[k], ux, up[k], up[k + 1] - up[k]);
+                }
+            }
+            changedSinceAdoption.Clear();
+            allChangedSinceAdoption = false;
+        }
+        else
+        {
+            allChangedSinceAdoption = true;
+        }
+        return true;
+    }
+
+    private void AdoptPattern(SparseLu<T> source)
+    {
+        Array.Copy(source.lp, lp, n + 1);
+        Array.Copy(source.up, up, n + 1);
+        Array.Copy(source.pinv, pinv, n);
+        if (lp[n] > li.Length) Grow(ref li, ref lx, lp[n]);
+        if (up[n] > ui.Length) Grow(ref ui, ref ux, up[n]);
+        Array.Copy(source.li, li, lp[n]);
+        Array.Copy(source.ui, ui, up[n]);
+        factoredColPtr = (int[])source.factoredColPtr.Clone();
+        factoredRowIdx = (int[])source.factoredRowIdx.Clone();
+        factorised = true;
+        onDiagonal = source.onDiagonal;
+        factorCount++;
+        adoptedFrom = source;
+        adoptedAt = source.PivotingFactorisations;
+        ownAtAdoption = PivotingFactorisations;
+    }
+
     private bool FactorFresh(CscMatrix<T> a, out int singularColumn)
     {
         singularColumn = -1;
-        factorised = TryFactorOnDiagonal(a) || FactorWithPivoting(a, out singularColumn);
+        allChangedSinceAdoption = true;
+        onDiagonal = TryFactorOnDiagonal(a);
+        factorised = onDiagonal || FactorWithPivoting(a, out singularColumn);
         factorCount++;
         if (factorised) PivotingFactorisations++;
         return factorised;

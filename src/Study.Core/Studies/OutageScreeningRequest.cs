@@ -12,10 +12,14 @@ public sealed record OutageScreeningRequest
     /// <summary>Outage solves run at once; null means one per processor.</summary>
     public int? MaxParallelism { get; init; }
 
+    /// <summary>The slice of the outages to solve (<see cref="OutageShard"/>); null for every outage.</summary>
+    public OutageShard? Shard { get; init; }
+
     /// <summary>Checks what can be checked without the network.</summary>
-    /// <exception cref="Model.InputException">The parallelism is below one, or an id is blank.</exception>
+    /// <exception cref="Model.InputException">The parallelism is below one, an id is blank, or the shard does not exist.</exception>
     public void Validate()
     {
+        Shard?.Validate();
         if (MaxParallelism is < 1)
             throw new Model.InputException($"the number of parallel solves must be at least 1 (got {MaxParallelism})");
         if (ElementIds.Any(string.IsNullOrWhiteSpace))

@@ -26,6 +26,11 @@ public sealed record OutageCase
     public required string Element { get; init; }
     public required Units.BranchKind Kind { get; init; }
     public string? Scenario { get; init; }
+    /// <summary>
+    /// The outage's number in the whole screening: scenario by scenario, elements in their order
+    /// (<see cref="OutageShard"/>). It orders ties and tells which shard solved it.
+    /// </summary>
+    public int Order { get; init; }
     public bool Converged { get; init; }
     /// <summary>Why the load flow failed, when it did.</summary>
     public string? Message { get; init; }
@@ -58,7 +63,7 @@ public sealed record ScenarioScreening
     public string? IntactMessage { get; init; }
     public double IntactLoadMw { get; init; }
     public IReadOnlyList<Violation> IntactViolations { get; init; } = [];
-    /// <summary>Ranked: severity, then stress, then the order the elements were given in.</summary>
+    /// <summary>Ranked (<see cref="OutageScreening.Rank"/>): severity, then stress, then the order the elements were given in.</summary>
     public IReadOnlyList<OutageCase> Outages { get; init; } = [];
 }
 
@@ -67,4 +72,8 @@ public sealed record OutageScreeningResult
     /// <summary>The elements taken out, in the order screened.</summary>
     public IReadOnlyList<string> Elements { get; init; } = [];
     public IReadOnlyList<ScenarioScreening> Scenarios { get; init; } = [];
+    /// <summary>The slice of the outages solved here (the whole screening unless it was sharded).</summary>
+    public OutageShard Shard { get; init; } = OutageShard.Whole;
+    /// <summary>Outages in the whole screening: elements × scenarios, whichever shard this is.</summary>
+    public int OutageCount { get; init; }
 }

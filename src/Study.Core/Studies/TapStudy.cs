@@ -7,10 +7,15 @@ namespace Study.Core.Studies;
 
 /// <summary>
 /// For one transformer, every position from min to max is solved in each scenario (one compiled model
-/// each), warm started
-/// from the neighbouring position. The studied tap is held at each position (its own regulation,
-/// if any, is off); other on-load taps regulate unless asked to hold. A position is recommended when
-/// every watched bus stays inside its band in every scenario; positions rank by the worst margin.
+/// each), warm started from the neighbouring position. The studied tap is held at each position (its
+/// own regulation, if any, is off); other on-load taps regulate unless asked to hold. A position is
+/// recommended when every watched bus stays inside its band in every scenario; positions rank by the
+/// worst margin.
+/// A warm start can carry Newton-Raphson onto the low-voltage solution of the same load (the lower
+/// branch of the P–V curve, which no system operates on) or fail where a flat start succeeds; a solve
+/// that fails, or whose lowest voltage collapses, is therefore repeated from flat start
+/// (<see cref="Checked"/>), and a solution left far below what a flat start gives is never used to
+/// recommend a position.
 /// </summary>
 public static class TapStudy
 {
@@ -25,11 +30,17 @@ public static class TapStudy
         PerUnitModel first = models[0];
         int tapIndex = TapIndex(first, request.TransformerId);
         PuTap tapChanger = first.Taps[tapIndex];
-        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger));
+        long positions = (long)tapChanger.Max - tapChanger.Min + 1;
+        if (positions > MostPositions)
+            throw new InputException($"transformer {request.TransformerId} has {positions} tap positions ({tapChanger.Min}..{tapChanger.Max}): " +
+                $"the tap study solves every one, and no tap changer has more than a few dozen; check tap.range (at most {MostPositions} are studied)",
+                elementId: request.TransformerId);
+        IReadOnlyList<string> watch = request.WatchBuses.Count > 0 ? request.WatchBuses : FedBuses(first, LvBus(first, tapChanger.Branch));
         foreach (string bus in watch)
             if (!first.BusIndex.ContainsKey(bus)) throw new InputException($"watched bus {bus} is not in the network (or is out of service)", elementId: bus);
 
         var points = new List<TapStudyPoint>();
+        var notes = new List<string>();
         int total = models.Count * (tapChanger.Max - tapChanger.Min + 1), done = 0;
         var solveOptions = options with { RegulateTaps = options.RegulateTaps && !request.HoldOtherTaps };
         foreach (PerUnitModel scenarioModel in models)
@@ -43,14 +54,79 @@ public static class TapStudy
             {
                 cancel.ThrowIfCancellationRequested();
                 PerUnitModel at = model.WithTapPosition(k, position);
-                LoadFlowResult r = LoadFlowSolver.Solve(at, solveOptions with { WarmStart = previous }, cancel);
-                if (r.Converged) previous = r;
-                points.Add(Point(at, k, position, scenarioModel.Scenario, r, watch, request.Band));
+                Solved solved = Checked(at, solveOptions, previous, cancel);
+                if (solved.Result.Converged && !solved.LowVoltage) previous = solved.Result;
+                TapStudyPoint point = Point(at, k, position, scenarioModel.Scenario, solved.Result, watch, request.Band)
+                    with { SolvedFromFlatStart = solved.FromFlatStart, LowVoltage = solved.LowVoltage };
+                if (solved.LowVoltage) point = point with { MarginPu = double.NegativeInfinity };
+                points.Add(point);
+                if (solved.Note is string note) notes.Add($"position {position}{On(scenarioModel.Scenario, models.Count)}: {note}");
                 progress?.Report(++done / (double)total);
             }
         }
-        return Rank(request, tapChanger, watch, models.Select(m => m.Scenario).ToList(), points);
+        return Rank(request, tapChanger, watch, models.Select(m => m.Scenario).ToList(), points) with { Notes = notes };
     }
+
+    /// <summary>More positions than any tap changer has by far: a range this wide is a slip, and would take hours to sweep.</summary>
+    public const int MostPositions = 1000;
+
+    /// <summary>Below this lowest voltage a solution is checked against a flat start: few networks run this low.</summary>
+    private const double CheckBelowPu = 0.8;
+
+    /// <summary>A fall of the lowest voltage by more than this from the neighbouring position is checked too: one step moves it a few percent.</summary>
+    private const double CheckDropPu = 0.1;
+
+    /// <summary>A warm-started solution this far below the flat-start one is the low-voltage solution.</summary>
+    private const double FarBelowPu = 0.05;
+
+    /// <summary>Without a flat-start solution to compare, a lowest voltage under this is taken for a collapse.</summary>
+    private const double CollapsePu = 0.5;
+
+    private sealed record Solved(LoadFlowResult Result, bool FromFlatStart, bool LowVoltage, string? Note);
+
+    /// <summary>
+    /// The warm-started solve, repeated from flat start when it failed or its lowest voltage collapsed;
+    /// the flat-start result replaces it when it converges higher. A solution that stays suspicious with
+    /// nothing to compare (the flat start fails too) and lies below <see cref="CollapsePu"/> is flagged.
+    /// </summary>
+    private static Solved Checked(PerUnitModel at, LoadFlowOptions options, LoadFlowResult? previous, CancellationToken cancel)
+    {
+        LoadFlowResult warm = LoadFlowSolver.Solve(at, options with { WarmStart = previous }, cancel);
+        if (previous is null) return new Solved(warm, true, false, null);
+        double? lowest = Lowest(warm);
+        bool suspicious = lowest is not double v || v < CheckBelowPu || v < Lowest(previous)!.Value - CheckDropPu;
+        if (!suspicious) return new Solved(warm, false, false, null);
+
+        LoadFlowResult flat = LoadFlowSolver.Solve(at, options with { WarmStart = null }, cancel);
+        double? flatLowest = Lowest(flat);
+        if (lowest is null)
+            return flatLowest is double f
+                ? new Solved(flat, true, false, $"the warm start from the neighbouring position did not converge; solved from flat start (lowest {Pu(f)} at {LowestBus(flat)})")
+                : new Solved(warm, false, false, null);
+        if (flatLowest is double higher && higher > lowest.Value + FarBelowPu)
+            return new Solved(flat, true, false,
+                $"the warm start reached a low-voltage solution (lowest {Pu(lowest.Value)} at {LowestBus(warm)}); " +
+                $"the flat-start solution is used (lowest {Pu(higher)} at {LowestBus(flat)})");
+        if (flatLowest is null && lowest.Value < CollapsePu)
+            return new Solved(warm, false, true,
+                $"only a collapsed solution was found (lowest {Pu(lowest.Value)} at {LowestBus(warm)}; a flat start does not converge): " +
+                "taken as no operating point");
+        return new Solved(warm, false, false, null);
+    }
+
+    private static double? Lowest(LoadFlowResult r)
+    {
+        if (!r.Converged) return null;
+        double lowest = double.PositiveInfinity;
+        foreach (BusResult b in r.Buses) if (b.Energised && b.VPu < lowest) lowest = b.VPu;
+        return double.IsFinite(lowest) ? lowest : null;
+    }
+
+    private static string LowestBus(LoadFlowResult r) => r.Buses.Where(b => b.Energised).MinBy(b => b.VPu)?.Id ?? "";
+
+    private static string Pu(double v) => v.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture) + " pu";
+
+    private static string On(Scenario? scenario, int scenarios) => scenarios > 1 ? $" in {scenario?.Name ?? "the loads as entered"}" : "";
 
     private static TapStudyPoint Point(PerUnitModel model, int tap, int position, Scenario? scenario,
         LoadFlowResult r, IReadOnlyList<string> watch, (double Low, double High)? band)
@@ -116,9 +192,9 @@ public static class TapStudy
     }
 
     /// <summary>The lv terminal of the tapped transformer: a two-winding bank's To bus, a three-winding bank's lv winding terminal.</summary>
-    private static int LvBus(PerUnitModel model, PuTap tap)
+    internal static int LvBus(PerUnitModel model, int branch)
     {
-        PuBranch tapped = model.Branches[tap.Branch];
+        PuBranch tapped = model.Branches[branch];
         if (tapped.Kind != BranchKind.ThreeWindingTransformer) return tapped.To;
         foreach (PuBranch b in model.Branches)
             if (b.Id == tapped.Id && b.Winding == "lv") return b.From;

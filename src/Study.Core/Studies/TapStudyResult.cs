@@ -19,8 +19,12 @@ public sealed record TapStudyPoint
     public double LossMw { get; init; }
     /// <summary>Voltage and loading violations anywhere in the system.</summary>
     public int Violations { get; init; }
-    /// <summary>Smallest distance of a watched voltage inside its band (negative: outside by that much).</summary>
+    /// <summary>Smallest distance of a watched voltage inside its band (negative: outside by that much; −∞ when no operating point).</summary>
     public double MarginPu { get; init; }
+    /// <summary>True when solved from flat start: the first position, or a warm start that failed or collapsed.</summary>
+    public bool SolvedFromFlatStart { get; init; }
+    /// <summary>True when the only solution found is a collapsed, low-voltage one: shown, but never recommended.</summary>
+    public bool LowVoltage { get; init; }
 }
 
 /// <summary>A position that keeps every watched bus in band in every scenario, with its worst-case margin.</summary>
@@ -43,4 +47,6 @@ public sealed record TapStudyResult
     public TapRecommendation? Closest { get; init; }
     /// <summary>A sentence stating the finding.</summary>
     public required string Finding { get; init; }
+    /// <summary>Positions whose warm-started solve was repeated from flat start, and why (one line each).</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
 }

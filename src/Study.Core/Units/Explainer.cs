@@ -8,7 +8,7 @@ namespace Study.Core.Units;
 /// <summary>
 /// `study explain FILE ID`: the same conversion routines the model builder calls, returning their
 /// steps. Ids are unique within a family; when two families share an id, the first found in the order
-/// buses, sources, branches, loads and shunts, breakers is explained.
+/// buses, sources, branches, loads, shunts and motors, breakers is explained.
 /// </summary>
 public static class Explainer
 {
@@ -23,6 +23,7 @@ public static class Explainer
         if (network.ThreeWindingTransformers.FirstOrDefault(e => e.Id == id) is { } t3) return ThreeWinding(network, t3, s);
         if (network.Loads.FirstOrDefault(e => e.Id == id) is { } load) return Load(load, s, scenario);
         if (network.Shunts.FirstOrDefault(e => e.Id == id) is { } shunt) return Shunt(shunt, s);
+        if (network.Motors.FirstOrDefault(e => e.Id == id) is { } motor) return Motor(network, motor, s, scenario);
         if (network.Breakers.FirstOrDefault(e => e.Id == id) is { } breaker) return Breaker(network, breaker, s);
         throw new InputException($"no element with id {id}", elementId: id);
     }
@@ -39,23 +40,43 @@ public static class Explainer
         var inputs = new Inputs().Text("from", l.From).Text("to", l.To).Num("km", l.Km, "km");
         AddSequence(inputs, "z1", l.Z1);
         AddSequence(inputs, "z0", l.Z0);
-        inputs.Num("ratingMva", l.RatingMva, "MVA");
+        inputs.Num("ratingMva", l.RatingMva, "MVA").Text("conductor", l.Conductor switch
+        {
+            ConductorMaterial.Copper => "copper",
+            ConductorMaterial.Aluminium => "aluminium",
+            _ => null,
+        });
         var c = LineImpedance.Convert(l, BusOf(n, l.From, l.Id), s);
-        return new(l.Id, ElementKind.Line, $"Line {l.Id}, {l.From} – {l.To}", inputs.List, c.Steps);
+        var steps = c.Steps.ToList();
+        double alpha = ConductorResistance.Coefficient(l.Conductor);
+        string alphaWhy = l.Conductor is null ? "conductor not given" : $"{(l.Conductor == ConductorMaterial.Copper ? "copper" : "aluminium")}";
+        steps.Add(l.Conductor is null
+            ? new DerivationStep("α", "conductor not given: 0.004 /K", alpha, "/K",
+                "conductor not given: α = 0.004 /K taken for the resistance at the end-of-fault temperature (default, not data)")
+            : new DerivationStep("α", $"{alphaWhy} at 20 °C", alpha, "/K"));
+        steps.Add(new DerivationStep("R at 80 °C", $"minimum fault levels: [1 + α·(80 − 20)] · r = [1 + {N(alpha)}·60] · r",
+            ConductorResistance.Factor(alpha, 80), "× r"));
+        return new(l.Id, ElementKind.Line, $"Line {l.Id}, {l.From} – {l.To}", inputs.List, steps);
     }
 
     private static ElementExplanation Transformer(Network n, Transformer t, double s)
     {
         var inputs = new Inputs().Text("hv", t.Hv).Text("lv", t.Lv).Num("mva", t.Mva, "MVA").Num("hvKv", t.HvKv, "kV").Num("lvKv", t.LvKv, "kV")
             .Num("zPercent", t.ZPercent, "%").Num("xr", t.Xr, "").Num("z0Percent", t.Z0Percent, "%").Num("units", t.Units, "")
-            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg == 0 ? null : t.PhaseShiftDeg, "°")
+            .Text("vectorGroup", t.VectorGroup).Num("phaseShiftDeg", t.PhaseShiftDeg, "°")
             .Num("rPu", t.RPu, "pu").Num("xPu", t.XPu, "pu").Num("bPu", t.BPu, "pu").Num("ratio", t.Ratio, "pu")
             .Num("ratingMva", t.RatingMva, "MVA");
         AddTap(inputs, t.Tap);
         if (t.NoLoad is { } nl) inputs.Num("noLoad.i0Percent", nl.I0Percent, "%").Num("noLoad.p0Kw", nl.P0Kw, "kW");
         var c = TransformerImpedance.Convert(t, BusOf(n, t.Hv, t.Id), BusOf(n, t.Lv, t.Id), s);
+        var steps = c.Steps.ToList();
+        if (t.Units > 1)
+            foreach (var (side, neutral) in new[] { ("hv", t.HvNeutral), ("lv", t.LvNeutral) })
+                if (neutral is { Grounded: true } e)
+                    steps.Add(new DerivationStep($"Z_N {side} (bank)", $"one neutral impedance per unit, in parallel: Z_N / units = {N(e.ROhm)} + j{N(e.XOhm)} ohm / {t.Units}",
+                        Math.Sqrt(e.ROhm * e.ROhm + e.XOhm * e.XOhm) / t.Units, "ohm"));
         string rating = t.Mva is double mva ? $", {N(t.HvKv ?? 0)}/{N(t.LvKv ?? 0)} kV, {N(mva)} MVA" + (t.Units > 1 ? $" × {t.Units}" : "") : ", per-unit data";
-        return new(t.Id, ElementKind.Transformer, $"Transformer {t.Id}, {t.Hv} (hv) – {t.Lv} (lv){rating}", inputs.List, c.Steps);
+        return new(t.Id, ElementKind.Transformer, $"Transformer {t.Id}, {t.Hv} (hv) – {t.Lv} (lv){rating}", inputs.List, steps);
     }
 
     private static ElementExplanation ThreeWinding(Network n, ThreeWindingTransformer t, double s)
@@ -97,7 +118,7 @@ public static class Explainer
     private static ElementExplanation Generator(Network n, Generator g, double s, Scenario? scenario)
     {
         var inputs = new Inputs().Text("bus", g.Bus).Text("mode", g.Mode.ToString().ToLowerInvariant()).Num("pMw", g.PMw, "MW").Num("qMvar", g.QMvar, "Mvar")
-            .Num("vSet", g.VSet, "pu").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
+            .Num("vSet", g.VSet, "pu").Num("angleDeg", g.AngleDeg, "°").Num("qMinMvar", g.QMinMvar, "Mvar").Num("qMaxMvar", g.QMaxMvar, "Mvar")
             .Num("mva", g.Mva, "MVA").Num("kv", g.Kv, "kV").Num("xdppPu", g.XdppPu, "pu").Num("x2Pu", g.X2Pu, "pu")
             .Num("x0Pu", g.X0Pu, "pu").Num("xr", g.Xr, "").Text("scenario", scenario?.Name);
         var c = GeneratorConversion.Convert(g, BusOf(n, g.Bus, g.Id), s, scenario?.GenerationScale ?? 1.0);
@@ -118,10 +139,46 @@ public static class Explainer
         return new(sh.Id, ElementKind.Shunt, $"Shunt {sh.Id} at {sh.Bus} ({kind})", inputs.List, ShuntConversion.Convert(sh, s).Steps);
     }
 
+    private static ElementExplanation Motor(Network n, Motor m, double s, Scenario? scenario)
+    {
+        var inputs = new Inputs().Text("bus", m.Bus).Num("mw", m.Mw, "MW").Num("kv", m.Kv, "kV").Num("powerFactor", m.PowerFactor, "")
+            .Num("efficiency", m.Efficiency, "").Num("polePairs", m.PolePairs, "").Num("units", m.Units, "")
+            .Text("lowVoltageGroup", m.LowVoltageGroup ? "true" : null).Num("loadPercent", m.LoadPercent, "%")
+            .Num("lockedRotor.currentRatio", m.LockedRotor?.CurrentRatio, "").Num("lockedRotor.powerFactor", m.LockedRotor?.PowerFactor, "")
+            .Text("starter.method", m.Starter is { } st ? StarterName(st.Method) : null)
+            .Num("starter.tapPercent", m.Starter?.TapPercent, "%").Num("starter.currentLimit", m.Starter?.CurrentLimit, "× rated")
+            .Text("scenario", scenario?.Name);
+        var c = MotorConversion.Convert(m, BusOf(n, m.Bus, m.Id), s, scenario?.LoadScale ?? 1.0);
+        var steps = c.Steps.ToList();
+        if (m.Starter is null)
+            steps.Add(new DerivationStep("starter", "not given: direct on line", 1.0, "", "starter not given: started direct on line (default, not data)"));
+        string units = m.Units > 1 ? $" × {m.Units}" : "";
+        string group = m.LowVoltageGroup ? "low-voltage motor group" : "motor";
+        return new(m.Id, ElementKind.Motor, $"{char.ToUpperInvariant(group[0])}{group[1..]} {m.Id} at {m.Bus}, {N(m.Mw ?? 0)} MW{units}", inputs.List, steps);
+    }
+
+    private static string StarterName(StarterMethod method) => method switch
+    {
+        StarterMethod.Direct => "direct",
+        StarterMethod.StarDelta => "starDelta",
+        StarterMethod.Autotransformer => "autotransformer",
+        _ => "softStarter",
+    };
+
     private static ElementExplanation Breaker(Network n, Breaker b, double s)
     {
-        var inputs = new Inputs().Text("bus", b.Bus).Num("interruptingKa", b.InterruptingKa, "kA").Num("peakKa", b.PeakKa, "kA");
-        return new(b.Id, ElementKind.Breaker, $"Breaker {b.Id} at {b.Bus}", inputs.List, BaseQuantities.ForBus(BusOf(n, b.Bus, b.Id), s).Steps);
+        var inputs = new Inputs().Text("bus", b.Bus).Text("branch", b.Branch).Num("interruptingKa", b.InterruptingKa, "kA").Num("peakKa", b.PeakKa, "kA")
+            .Num("dcPercent", b.DcPercent, "%").Num("shortTimeKa", b.ShortTimeKa, "kA").Num("shortTimeS", b.ShortTimeS, "s").Num("minTripS", b.MinTripS, "s");
+        var steps = BaseQuantities.ForBus(BusOf(n, b.Bus, b.Id), s).Steps.ToList();
+        if (b.ShortTimeKa is not null && b.ShortTimeS is null)
+            steps.Add(new DerivationStep("shortTimeS", "= 1", 1.0, "s", "shortTimeS not given: 1 s taken (the usual rated duration, default, not data)"));
+        if (b.MinTripS is null)
+            steps.Add(new DerivationStep("t_min", "the study's --tmin (0.1 s unless given)", 0.1, "s", "minTripS not given: the study's minimum time delay is used"));
+        if (b.DcPercent is not null && b.InterruptingKa > 0)
+            steps.Add(new DerivationStep("I_b,asym rated", $"interruptingKa · √(1 + 2·(dcPercent/100)²) = {N(b.InterruptingKa)} · √(1 + 2·({N(b.DcPercent.Value)}/100)²)",
+                b.InterruptingKa * Math.Sqrt(1 + 2 * Math.Pow(b.DcPercent.Value / 100, 2)), "kA"));
+        string what = b.Branch is null ? "" : $", switching {b.Branch}";
+        return new(b.Id, ElementKind.Breaker, $"Breaker {b.Id} at {b.Bus}{what}", inputs.List, steps);
     }
 
     private static void AddSequence(Inputs inputs, string key, SequenceImpedance? z)

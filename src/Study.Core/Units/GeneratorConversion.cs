@@ -10,7 +10,7 @@ namespace Study.Core.Units;
 /// sequence impedances (null otherwise; Z0 null when x0 is not given).
 /// </summary>
 public sealed record GeneratorConversionResult(
-    double P, double Q, double VSet, double? QMin, double? QMax,
+    double P, double Q, double VSet, double AngleRad, double? QMin, double? QMax,
     Complex? Z1Pu, Complex? Z2Pu, Complex? Z0Pu, IReadOnlyList<DerivationStep> Steps);
 
 /// <summary>
@@ -29,6 +29,11 @@ public static class GeneratorConversion
             : d.Step("P", $"pMw · generationScale / S_base = {N(g.PMw)} · {N(scale)} / {N(baseMva)}", g.PMw * scale / baseMva, "pu");
         double q = d.Step("Q", $"qMvar / S_base = {N(g.QMvar)} / {N(baseMva)}", g.QMvar / baseMva, "pu");
         double vSet = d.Step("V_set", "vSet given", g.VSet, "pu");
+        // Only a slack source holds an angle: the island's reference, so every angle reported is measured from it.
+        double angle = g.Mode == GeneratorMode.Slack
+            ? d.Step("angle", $"angleDeg · π / 180 = {N(g.AngleDeg ?? 0)} · π / 180 (the island's reference angle)",
+                (g.AngleDeg ?? 0) * Math.PI / 180.0, "rad")
+            : 0.0;
 
         // Q limits of 0 and 0 mean "no limits stated" (README, Network files).
         bool noLimits = g.QMinMvar is null or 0 && g.QMaxMvar is null or 0;
@@ -53,7 +58,7 @@ public static class GeneratorConversion
                 : Assumed(d, z1.Value, "x2 not given: taken equal to x''d (default, not data)");
             if (g.X0Pu is double x0) z0 = Reactance(d, "x0", x0, rOverX, k);
         }
-        return new GeneratorConversionResult(p, q, vSet, qMin, qMax, z1, z2, z0, d.ToList());
+        return new GeneratorConversionResult(p, q, vSet, angle, qMin, qMax, z1, z2, z0, d.ToList());
     }
 
     /// <summary>

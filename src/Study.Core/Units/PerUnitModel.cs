@@ -40,6 +40,11 @@ public sealed record PuBranch
     public double B { get; init; }
     public double Ratio { get; init; } = 1.0;
     public double ShiftRad { get; init; }
+    /// <summary>
+    /// The part of <see cref="ShiftRad"/> that is the vector group's clock displacement. Fault studies
+    /// build their sequence networks without it and turn voltages across the bank by the clock lag.
+    /// </summary>
+    public double GroupShiftRad { get; init; }
     /// <summary>Magnetising admittance G − jB at the From terminal (transformers).</summary>
     public Complex MagnetisingY { get; init; }
     public double? RatingMva { get; init; }
@@ -59,6 +64,11 @@ public sealed record PuBranch
     public PuWindings? Windings { get; init; }
     /// <summary>Identical units in parallel (two-winding transformers).</summary>
     public int Units { get; init; } = 1;
+    /// <summary>
+    /// Lines: the temperature coefficient α of the conductor's resistance, per kelvin, for the resistance at
+    /// the end-of-fault temperature; null for transformers.
+    /// </summary>
+    public double? ResistanceCoefficient { get; init; }
 }
 
 /// <summary>A source: supply point or generator, with its load-flow role.</summary>
@@ -95,6 +105,11 @@ public sealed record PuLoad
     public double P { get; init; }
     public double Q { get; init; }
     public ZipMix Zip { get; init; } = ZipMix.ConstantPower;
+    /// <summary>
+    /// True for a motor's running load (constant power): a fault study represents the motor by its own
+    /// impedance (<see cref="PuMotor"/>) instead, and a start leaves out the motors it starts.
+    /// </summary>
+    public bool Motor { get; init; }
 }
 
 /// <summary>A shunt admittance G + jB in pu at 1 pu voltage (B &gt; 0 capacitive).</summary>
@@ -127,6 +142,8 @@ public sealed record PuTap
     public int? RegulatedBus { get; init; }
     public double VTarget { get; init; } = 1.0;
     public double BandPu { get; init; }
+    /// <summary>True when the file gives the changer a regulation (on-load), even if its regulated bus is out of service.</summary>
+    public bool OnLoad { get; init; }
     /// <summary>
     /// True when the tap factor multiplies the From end whatever <see cref="Winding"/> says: the windings of
     /// a three-winding transformer, each a branch from its own terminal to the star.
@@ -162,5 +179,6 @@ public sealed partial record PerUnitModel
     public IReadOnlyList<PuShunt> Shunts { get; init; } = [];
     public IReadOnlyList<PuTap> Taps { get; init; } = [];
     public IReadOnlyList<PuBreaker> Breakers { get; init; } = [];
+    public IReadOnlyList<PuMotor> Motors { get; init; } = [];
     public IReadOnlyDictionary<string, int> BusIndex { get; init; } = new Dictionary<string, int>();
 }

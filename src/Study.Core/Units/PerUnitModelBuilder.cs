@@ -53,6 +53,7 @@ public sealed partial record PerUnitModel
             {
                 Id = line.Id, Kind = BranchKind.Line, From = index[line.From], To = index[line.To],
                 Z = c.ZPu, B = c.BPu, Z0 = c.Z0Pu, B0 = c.B0Pu, RatingMva = line.RatingMva,
+                ResistanceCoefficient = ConductorResistance.Coefficient(line.Conductor),
             });
         }
 
@@ -73,6 +74,7 @@ public sealed partial record PerUnitModel
             {
                 Id = t.Id, Kind = BranchKind.Transformer, From = index[t.Hv], To = index[t.Lv],
                 Z = c.ZPu, Z0 = c.Z0Pu, B = c.BPu, Ratio = c.Ratio, ShiftRad = c.ShiftRad,
+                GroupShiftRad = c.ShiftFromGroup ? c.ShiftRad : 0,
                 MagnetisingY = c.MagnetisingY, RatingMva = c.RatingMva, Tap = tapIndex,
                 Rating = TransformerRating.Of(t), Units = t.Units,
                 Windings = PuWindings.Compile(t.Id, t.VectorGroup, threeWinding: false, hvNeutral, PuNeutral.NotStated, lvNeutral),
@@ -106,7 +108,7 @@ public sealed partial record PerUnitModel
                 branches.Add(new PuBranch
                 {
                     Id = t.Id, Kind = BranchKind.ThreeWindingTransformer, From = index[terminal], To = star,
-                    Z = w.ZPu, Z0 = w.ZPu, Ratio = w.Ratio, RatingMva = w.RatingMva, Winding = w.Winding, Tap = tapIndex,
+                    Z = w.ZPu, Z0 = w.ZPu, Ratio = w.Ratio, ShiftRad = w.ShiftRad, GroupShiftRad = w.ShiftRad, RatingMva = w.RatingMva, Winding = w.Winding, Tap = tapIndex,
                     MagnetisingY = w.Winding == "hv" ? c.MagnetisingY : Complex.Zero,
                     ThreeWindingRating = rating, Windings = windings,
                 });
@@ -144,7 +146,7 @@ public sealed partial record PerUnitModel
             sources.Add(new PuSource
             {
                 Id = g.Id, Kind = ElementKind.Generator, Bus = index[g.Bus], Mode = g.Mode,
-                P = c.P, Q = c.Q, VSet = c.VSet, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
+                P = c.P, Q = c.Q, VSet = c.VSet, AngleRad = c.AngleRad, QMin = c.QMin, QMax = c.QMax, Z1 = c.Z1Pu, Z2 = c.Z2Pu, Z0 = c.Z0Pu,
                 Rating = GeneratorRating.Of(g), Neutral = PuNeutral.Compile(g.Neutral, bus.Kv, baseMva, g.Id, "neutral"),
             });
         }
@@ -156,6 +158,20 @@ public sealed partial record PerUnitModel
             if (!l.InService || !Live(l.Bus, l.Id, out _)) continue;
             var c = LoadConversion.Convert(l, loadScale, baseMva, recordSteps: false);
             loads.Add(new PuLoad { Id = l.Id, Bus = index[l.Bus], P = c.P, Q = c.Q, Zip = c.Zip });
+        }
+        // A running motor is a constant-power load to every load flow, scaled by the scenario like the other loads.
+        var motors = new List<PuMotor>();
+        foreach (var m in network.Motors)
+        {
+            if (!m.InService || !Live(m.Bus, m.Id, out var bus)) continue;
+            var c = MotorConversion.Convert(m, bus, baseMva, loadScale, recordSteps: false);
+            loads.Add(new PuLoad { Id = m.Id, Bus = index[m.Bus], P = c.P, Q = c.Q, Motor = true });
+            motors.Add(new PuMotor
+            {
+                Id = m.Id, Bus = index[m.Bus], ZPu = c.ZPu, ROverX = c.ROverX, RatedCurrentPu = c.RatedCurrentPu, RatedMva = c.RatedMva,
+                MwPerPolePair = c.MwPerPolePair, LowVoltage = c.LowVoltage, LockedRotorZPu = c.LockedRotorZPu, CurrentRatio = c.CurrentRatio,
+                Starter = m.Starter ?? new MotorStarter(), Units = m.Units,
+            });
         }
         var shunts = new List<PuShunt>();
         foreach (var s in network.Shunts)
@@ -169,7 +185,18 @@ public sealed partial record PerUnitModel
         foreach (var b in network.Breakers)
         {
             if (!b.InService || !Live(b.Bus, b.Id, out _)) continue;
-            breakers.Add(new PuBreaker { Id = b.Id, Bus = index[b.Bus], BusId = b.Bus, InterruptingKa = b.InterruptingKa, PeakKa = b.PeakKa });
+            int busIndex = index[b.Bus];
+            // The branch's end at the breaker's bus (for a three-winding bank, the winding there).
+            int? branch = null;
+            if (b.Branch is string branchId)
+                for (int k = 0; k < branches.Count && branch is null; k++)
+                    if (branches[k].Id == branchId && (branches[k].From == busIndex || branches[k].To == busIndex)) branch = k;
+            breakers.Add(new PuBreaker
+            {
+                Id = b.Id, Bus = busIndex, BusId = b.Bus, BranchId = b.Branch, Branch = branch,
+                InterruptingKa = b.InterruptingKa, PeakKa = b.PeakKa, DcPercent = b.DcPercent,
+                ShortTimeKa = b.ShortTimeKa, ShortTimeS = b.ShortTimeS ?? 1.0, MinTripS = b.MinTripS,
+            });
         }
 
         return new PerUnitModel
@@ -178,7 +205,7 @@ public sealed partial record PerUnitModel
             PerUnitOnly = network.IsPerUnitOnly,
             OutOfServiceBuses = network.Buses.Where(b => !b.InService).Select(b => b.Id).ToHashSet(),
             Buses = buses, Branches = branches, Sources = sources, Loads = loads, Shunts = shunts, Taps = taps,
-            Breakers = breakers, BusIndex = index, Warnings = warnings,
+            Breakers = breakers, Motors = motors, BusIndex = index, Warnings = warnings,
         };
     }
 
@@ -198,6 +225,16 @@ public sealed partial record PerUnitModel
         var newBranches = Branches.ToArray();
         newBranches[tap.Branch] = newBranches[tap.Branch] with { Ratio = tap.RatioAt(position) };
         return this with { Taps = newTaps, Branches = newBranches };
+    }
+
+    /// <summary>The same model with each tap at the position a solved load flow left it (on-load changers may have moved).</summary>
+    public PerUnitModel WithSolvedTaps(LoadFlow.LoadFlowResult flow)
+    {
+        PerUnitModel model = this;
+        for (int t = 0; t < Taps.Count && t < flow.Taps.Count; t++)
+            if (flow.Taps[t].Id == Taps[t].Id && flow.Taps[t].Position != Taps[t].Position)
+                model = model.WithTapPosition(t, flow.Taps[t].Position);
+        return model;
     }
 
     /// <summary>
@@ -228,14 +265,16 @@ public sealed partial record PerUnitModel
         }
         for (int k = 0; k < keptBranches.Count; k++)
             if (keptBranches[k].Tap is int t) keptBranches[k] = keptBranches[k] with { Tap = tapIndex[t] };
-        return this with { Branches = keptBranches, Taps = keptTaps };
+        // A breaker on the removed branch switches nothing now: its duty becomes that of its bus.
+        var breakers = Breakers.Select(b => b.Branch is int k ? b with { Branch = newIndex[k] < 0 ? null : newIndex[k] } : b).ToList();
+        return this with { Branches = keptBranches, Taps = keptTaps, Breakers = breakers };
     }
 
     private static PuTap NewTap(string id, int branch, TapChanger tap, double hvFactor, double lvFactor, bool factorAtFrom) => new()
     {
         Id = id, Branch = branch, Winding = tap.Winding, PercentPerStep = tap.PercentPerStep,
         Min = tap.Range.Lowest, Max = tap.Range.Highest, Position = tap.Position,
-        HvFactor = hvFactor, LvFactor = lvFactor, FactorAtFrom = factorAtFrom,
+        HvFactor = hvFactor, LvFactor = lvFactor, FactorAtFrom = factorAtFrom, OnLoad = tap.Regulate is not null,
     };
 
     private static string WindingName(TapWinding winding) => winding switch

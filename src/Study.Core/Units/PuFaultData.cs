@@ -110,14 +110,25 @@ public sealed record PuWindings
     }
 }
 
-/// <summary>A breaker at an in-service bus, with its ratings (zero: not given).</summary>
+/// <summary>A breaker at an in-service bus, with its ratings (zero or null: not given).</summary>
 public sealed record PuBreaker
 {
     public required string Id { get; init; }
     public int Bus { get; init; }
     public required string BusId { get; init; }
+    /// <summary>The branch it switches at its bus; null for a breaker that sees the whole bus.</summary>
+    public string? BranchId { get; init; }
+    /// <summary>Index into the model's branches of that branch's end at the bus; null without a branch or when the branch is out of service.</summary>
+    public int? Branch { get; init; }
     /// <summary>Rated short-circuit breaking current, kA; 0 when not given.</summary>
     public double InterruptingKa { get; init; }
     /// <summary>Rated short-circuit making (peak) current, kA; 0 when not given.</summary>
     public double PeakKa { get; init; }
+    /// <summary>Rated DC component of the breaking current, percent.</summary>
+    public double? DcPercent { get; init; }
+    public double? ShortTimeKa { get; init; }
+    /// <summary>Rated duration of the short-time current, s (1 s when not given).</summary>
+    public double ShortTimeS { get; init; } = 1.0;
+    /// <summary>Relay plus opening time, s; null: the study's minimum time delay applies.</summary>
+    public double? MinTripS { get; init; }
 }

@@ -10,7 +10,11 @@ namespace Study.Core.Units;
 /// <see cref="Ratio"/>:1 at the terminal, series Z on the star side. WindingFactor is rated winding kV
 /// over terminal bus kV (the <see cref="PuTap.HvFactor"/> of a tap on this winding).
 /// </summary>
-public sealed record StarWinding(string Winding, Complex ZPu, double Ratio, double WindingFactor, double RatingMva);
+public sealed record StarWinding(string Winding, Complex ZPu, double Ratio, double WindingFactor, double RatingMva)
+{
+    /// <summary>Phase displacement φ of the winding's ideal ratio, from the vector group (<see cref="PhaseDisplacement.Winding"/>).</summary>
+    public double ShiftRad { get; init; }
+}
 
 /// <summary>The star equivalent on the system base, with the magnetising admittance at the hv terminal.</summary>
 public sealed record ThreeWindingStarResult(
@@ -59,8 +63,10 @@ public static class ThreeWindingStar
         double k = d.Step("base change", $"S_base / zBaseMva = {N(baseMva)} / {N(zBaseMva)}", baseMva / zBaseMva, "");
 
         var hv = Winding(d, "hv", zH, k, t.Xr, hvKv, hvBusKv, t.MvaHv, TapOn(t, TapWinding.Hv));
-        var mv = Winding(d, "mv", zM, k, t.Xr, mvKv, mvBusKv, t.MvaMv, TapOn(t, TapWinding.Mv));
-        var lv = Winding(d, "lv", zL, k, t.Xr, lvKv, lvBusKv, t.MvaLv, TapOn(t, TapWinding.Lv));
+        var mv = Winding(d, "mv", zM, k, t.Xr, mvKv, mvBusKv, t.MvaMv, TapOn(t, TapWinding.Mv))
+            with { ShiftRad = PhaseDisplacement.Winding(d, t, "mv").Rad };
+        var lv = Winding(d, "lv", zL, k, t.Xr, lvKv, lvBusKv, t.MvaLv, TapOn(t, TapWinding.Lv))
+            with { ShiftRad = PhaseDisplacement.Winding(d, t, "lv").Rad };
         if (hv.ZPu == Complex.Zero || mv.ZPu == Complex.Zero || lv.ZPu == Complex.Zero)
             throw new InputException("a star winding has zero impedance: check zHmPercent, zHlPercent, zMlPercent", elementId: t.Id);
 

@@ -28,6 +28,8 @@ public sealed record TransformerImpedanceResult
     public double BPu { get; init; }
     public double Ratio { get; init; } = 1.0;
     public double ShiftRad { get; init; }
+    /// <summary>True when <see cref="ShiftRad"/> is the vector group's clock displacement (not a given phaseShiftDeg).</summary>
+    public bool ShiftFromGroup { get; init; }
     public Complex MagnetisingY { get; init; }
     public double HvFactor { get; init; } = 1.0;
     public double LvFactor { get; init; } = 1.0;
@@ -98,7 +100,7 @@ public static class TransformerImpedance
         double hvFactor = d.Step("hv winding / bus", $"hvKv / kV_hv bus = {N(hvKv)} / {N(hvBusKv)}", hvKv / hvBusKv, "pu");
         double lvFactor = d.Step("lv winding / bus", $"lvKv / kV_lv bus = {N(lvKv)} / {N(lvBusKv)}", lvKv / lvBusKv, "pu");
         double ratio = TapRatio.Compute(d, t.Tap, hvFactor, lvFactor);
-        double shiftRad = Shift(d, t);
+        Displacement shift = PhaseDisplacement.TwoWinding(d, t);
 
         Complex ym = t.NoLoad is null
             ? Complex.Zero
@@ -111,7 +113,8 @@ public static class TransformerImpedance
             Z0Pu = new Complex(r0Sys, x0Sys),
             Z0IsDefault = z0Default,
             Ratio = ratio,
-            ShiftRad = shiftRad,
+            ShiftRad = shift.Rad,
+            ShiftFromGroup = shift.FromGroup,
             MagnetisingY = ym,
             HvFactor = hvFactor,
             LvFactor = lvFactor,
@@ -150,6 +153,7 @@ public static class TransformerImpedance
                 TapRatio.Factor(tap.Position, tap.PercentPerStep), "pu");
             hvFactor = tap.Winding == TapWinding.Lv ? ratio * f : ratio / f;
         }
+        Displacement displacement = PhaseDisplacement.TwoWinding(d, t);
         return new TransformerImpedanceResult
         {
             Form = TransformerDataForm.PerUnit,
@@ -158,17 +162,12 @@ public static class TransformerImpedance
             Z0IsDefault = true,
             BPu = b,
             Ratio = ratio,
-            ShiftRad = Shift(d, t),
+            ShiftRad = displacement.Rad,
+            ShiftFromGroup = displacement.FromGroup,
             HvFactor = hvFactor,
             LvFactor = lvFactor,
             RatingMva = t.RatingMva,
             Steps = d.ToList(),
         };
-    }
-
-    private static double Shift(Derivation d, Transformer t)
-    {
-        if (t.PhaseShiftDeg == 0) return 0.0;
-        return d.Step("φ", $"phaseShiftDeg · π / 180 = {N(t.PhaseShiftDeg)} · π / 180", t.PhaseShiftDeg * Math.PI / 180.0, "rad");
     }
 }

@@ -34,7 +34,9 @@ public sealed class AtomicSaveTests : IDisposable
             throw new IOException("simulated crash between write and rename");
         };
 
-        Assert.Throws<IOException>(() => Write(writer, path));
+        // The failure surfaces as an input error, "cannot write PATH: reason" (exit 2 at the command line).
+        var e = Assert.Throws<Study.Core.Model.InputException>(() => Write(writer, path));
+        Assert.Equal($"cannot write {path}: simulated crash between write and rename", e.Message);
 
         Assert.NotNull(temporary);
         Assert.Equal(dir, Path.GetDirectoryName(temporary));

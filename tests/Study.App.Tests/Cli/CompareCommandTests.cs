@@ -63,12 +63,12 @@ public class CompareCommandTests
         Assert.Equal(0, run.ExitCode);
         Assert.Empty(dir.Leftovers());
         Assert.Equal(["id", "kv", "membership", "beforePu", "afterPu", "deltaPu"], ReportChecks.CsvHeader(dir.File("buses.csv")));
-        Assert.Equal(1 + 9, File.ReadAllLines(dir.File("buses.csv")).Length);
+        Assert.Equal(1 + 10, File.ReadAllLines(dir.File("buses.csv")).Length);
         Assert.Equal(["id", "kind", "membership", "beforeMw", "afterMw", "deltaMw", "beforeLoadingPercent", "afterLoadingPercent"],
             ReportChecks.CsvHeader(dir.File("branches.csv")));
         Assert.Equal(["change", "element", "kind", "type", "value", "limit"], ReportChecks.CsvHeader(dir.File("violations.csv")));
         var tables = ReportChecks.MarkdownTables(File.ReadAllText(dir.File("compare.md")));
-        Assert.Equal((6, 9), tables[0]);
-        Assert.Equal(10, tables[1].Rows);
+        Assert.Equal((6, 10), tables[0]);
+        Assert.Equal(11, tables[1].Rows);
     }
 }

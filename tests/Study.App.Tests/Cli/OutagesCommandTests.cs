@@ -35,7 +35,7 @@ public class OutagesCommandTests
         foreach (string key in new[] { "element", "kind", "converged", "islandedBuses", "lostLoadMw", "newViolations", "worstVPu", "worstLoadingPercent", "severity" })
             Assert.True(first.TryGetProperty(key, out _), $"missing {key}");
         Assert.Equal("CQ-T1", first.GetProperty("element").GetString());
-        Assert.Equal(3, first.GetProperty("islandedBuses").GetArrayLength());
+        Assert.Equal(4, first.GetProperty("islandedBuses").GetArrayLength());
 
         CliOutcome one = CliRun.Run("outages", DemoNetworks.Demo, "--scenario", "winter-peak", "--elements", "GT1", "--json");
         using var single = JsonDocument.Parse(one.Out);
@@ -59,7 +59,7 @@ public class OutagesCommandTests
         Assert.Equal(["scenario", "rank", "severity", "element", "kind", "converged", "islandedBuses", "lostLoadMw", "lostGenerationMw",
             "worstVPu", "worstVBus", "worstLoadingPercent", "worstLoadingElement", "newViolations", "stressPercent"],
             ReportChecks.CsvHeader(dir.File("csv/outages.csv")));
-        Assert.Equal(1 + 2 * 10, File.ReadAllLines(dir.File("csv/outages.csv")).Length);
+        Assert.Equal(1 + 2 * 11, File.ReadAllLines(dir.File("csv/outages.csv")).Length);
         Assert.Equal(["scenario", "outage", "element", "kind", "type", "value", "limit", "intactValue"],
             ReportChecks.CsvHeader(dir.File("csv/new-violations.csv")));
 
@@ -69,7 +69,7 @@ public class OutagesCommandTests
         Assert.Contains("- **scenario:** scenarios winter-peak, summer-night", text);
         var tables = ReportChecks.MarkdownTables(text);
         Assert.Equal(2, tables.Count);
-        Assert.All(tables, t => Assert.Equal(10, t.Rows));
+        Assert.All(tables, t => Assert.Equal(11, t.Rows));
     }
 
     [Fact]

@@ -10,11 +10,13 @@ public class ReportCommandsTests
     public void Solve_markdown_holds_the_same_tables_as_the_terminal_report_and_lists_the_inputs()
     {
         using var dir = new TempDirectory();
+        // The folder must exist: output never creates folders (InputSafetyTests).
+        Directory.CreateDirectory(dir.File("notes"));
         string md = dir.File("notes/solve.md");
         CliOutcome run = CliRun.Run("solve", DemoNetworks.Demo, "--scenario", "winter-peak", "--markdown", md);
         Assert.Equal(0, run.ExitCode);
         Assert.StartsWith("Load flow: ", run.Out);
-        Assert.Contains("\nBuses (9)   ▼ below vMin, ▲ above vMax\n  bus ", run.Out);
+        Assert.Contains("\nBuses (10)   ▼ below vMin, ▲ above vMax\n  bus ", run.Out);
         Assert.Empty(dir.Leftovers());
 
         string text = File.ReadAllText(md);
@@ -23,7 +25,7 @@ public class ReportCommandsTests
         Assert.Contains("- **options:** Newton-Raphson, tolerance 1.0e-8 pu", text);
         Assert.Contains("## Violations (0)", text);
         var tables = ReportChecks.MarkdownTables(text);
-        Assert.Equal([(11, 9), (13, 10), (5, 4)], tables);
+        Assert.Equal([(11, 10), (13, 11), (5, 5)], tables);
     }
 
     [Fact]
@@ -32,7 +34,7 @@ public class ReportCommandsTests
         using var dir = new TempDirectory();
         CliOutcome run = CliRun.Run("taps", DemoNetworks.Demo, "--transformer", "CQ-T1", "--csv", dir.Path, "--markdown", dir.File("taps.md"));
         Assert.Equal(0, run.ExitCode);
-        Assert.Equal(["position", "ratio", "scenario", "converged", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
+        Assert.Equal(["position", "ratio", "scenario", "converged", "solvedFromFlatStart", "lowVoltage", "CQ11.vPu", "CS11.vPu", "PS11.vPu",
             "vMinPu", "vMinBus", "vMaxPu", "vMaxBus", "lossMw", "violations", "marginPu"], ReportChecks.CsvHeader(dir.File("positions.csv")));
         Assert.Equal(1 + 5 * 2, File.ReadAllLines(dir.File("positions.csv")).Length);
         Assert.Equal(["rank", "position", "marginPu"], ReportChecks.CsvHeader(dir.File("recommended.csv")));
@@ -55,11 +57,14 @@ public class ReportCommandsTests
         Assert.InRange(caution, 0, text.IndexOf("I''k", StringComparison.Ordinal));
         Assert.Contains("- **method:** IEC 60909", text);
         Assert.DoesNotContain("```", text);
-        // Levels: bus, kV, type, I''k, S''k, 3I0, X/R, kappa, ip, Z1, Z0 for 9 buses × (3ph, slg); then the breaker duty table.
+        // Levels: bus, kV, type, I''k, S''k, 3I0, X/R, kappa, ip, Z1, Z0 for 10 buses × (3ph, slg); the breaking and
+        // thermal currents (bus, type, I''k, I_b, i_DC, DC %, I_b,asym, I_k, I_th); then one row per breaker and one per check.
         var tables = ReportChecks.MarkdownTables(text);
-        Assert.Equal(2, tables.Count);
-        Assert.Equal((11, 18), tables[0]);
-        Assert.Equal(9, tables[1].Columns);
+        Assert.Equal(4, tables.Count);
+        Assert.Equal((11, 20), tables[0]);
+        Assert.Equal((9, 20), tables[1]);
+        Assert.Equal((10, 19), tables[2]);
+        Assert.Equal((9, 4 * 19), tables[3]);
         Assert.Contains("| bus | kV | type | I''k kA | S''k MVA |", text);
     }
 
@@ -71,11 +76,14 @@ public class ReportCommandsTests
         Assert.Equal(0, run.ExitCode);
         string text = File.ReadAllText(dir.File("fault.md"));
         var tables = ReportChecks.MarkdownTables(text);
-        // Levels, then per fault type a phase-voltage table (bus, Va, Vb, Vc) and a contribution table, then breakers.
-        Assert.Equal(1 + 2 * 2 + 1, tables.Count);
+        // Levels and their breaking and thermal currents; per fault type a phase-voltage table (bus, Va, Vb, Vc) and a
+        // contribution table, and for the three-phase fault the machines' own currents and decay; then breakers and their checks.
+        Assert.Equal(2 + 3 + 2 + 2, tables.Count);
         Assert.Equal((11, 2), tables[0]);
-        Assert.Equal(4, tables[1].Columns);
+        Assert.Equal((9, 2), tables[1]);
         Assert.Equal(4, tables[2].Columns);
+        Assert.Equal(4, tables[3].Columns);
+        Assert.Equal((8, 4), tables[4]);
         Assert.Contains("## slg at CQ11: phase voltages after the fault (pu)", text);
         Assert.InRange(text.IndexOf("CAUTION: ", StringComparison.Ordinal), 0, text.IndexOf("\n|", StringComparison.Ordinal));
     }

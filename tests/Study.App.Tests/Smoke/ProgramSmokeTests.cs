@@ -26,7 +26,7 @@ public sealed class ProgramSmokeTests(ITestOutputHelper output)
         using TmuxSession tmux = TmuxSession.Start($"dotnet '{dll}'", dir, 80, 24);
         try
         {
-            Expect(tmux, "Buses (9)", Start, "the demo network's element list");
+            Expect(tmux, "Buses (10)", Start, "the demo network's element list");
             Expect(tmux, "not solved", Step, "the status line before a solve");
 
             tmux.Keys("F5");

@@ -40,14 +40,20 @@ public class DemoNetworkFaultTests
         Assert.True(more.At("MRG11", FaultKind.ThreePhase).IkKa > less.At("MRG11", FaultKind.ThreePhase).IkKa * 1.2);
     }
 
+    // The breaking check now uses I_b at the breaker's own t_min (it used I''k before the duty checks), and a
+    // breaker on a branch carries the larger of its two sides; the duty is the worst of its four checks.
     [Fact]
-    public void Breaker_duty_is_the_larger_of_breaking_and_making_ratios()
+    public void Breaker_duty_is_the_worst_of_its_checks_each_from_the_largest_current_it_carries()
     {
         var result = Scan(TestNetworks.Demo);
         var cb = result.Breakers.Single(b => b.Id == "CB-CS11");
-        var worst = result.Faults.Where(f => f.Bus == "CS11").MaxBy(f => f.IkKa)!;
-        Assert.Equal(100 * worst.IkKa!.Value / 8, cb.BreakingPercent!.Value, 1e-9);
-        Assert.Equal(Math.Max(cb.BreakingPercent!.Value, cb.MakingPercent!.Value), cb.DutyPercent!.Value);
+        var carried = result.Faults.Where(f => f.Bus == "CS11").SelectMany(f => f.BreakerCurrents).Where(c => c.Breaker == "CB-CS11")
+            .SelectMany(c => c.Sides).ToList();
+        double baseKa = 100 / (Math.Sqrt(3) * 11);
+        Assert.Equal(100 * carried.Max(s => s.IbPu) * baseKa / 8, cb.BreakingPercent!.Value, 1e-9);
+        Assert.Equal(100 * carried.Max(s => s.IpPu) * baseKa / 20, cb.MakingPercent!.Value, 1e-9);
+        Assert.Equal(4, cb.Checks.Count);
+        Assert.Equal(cb.Checks.Max(c => c.DutyPercent), cb.DutyPercent);
         var expected = cb.DutyPercent > 100 ? DutyStatus.Over : cb.DutyPercent > 90 ? DutyStatus.Warning : DutyStatus.Ok;
         Assert.Equal(expected, cb.Status);
     }

@@ -28,7 +28,7 @@ public class CommonFormatReaderTests
         Assert.Equal(0.0, t47.RPu);
         Assert.Equal(0.20912, t47.XPu);
         Assert.Null(t47.BPu);
-        Assert.Equal(0, t47.PhaseShiftDeg);
+        Assert.Null(t47.PhaseShiftDeg);
     }
 
     [Fact]

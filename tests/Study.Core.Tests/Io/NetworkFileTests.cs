@@ -126,7 +126,9 @@ public class NetworkFileTests
         AtomicFile.BeforeRename = _ => throw new IOException("disk full (simulated)");
         try
         {
-            Assert.Throws<IOException>(() => NetworkFile.Write(n with { Name = "changed" }, path));
+            // A failed write is an input error naming the path and the reason (exit 2 at the command line).
+            var e = Assert.Throws<InputException>(() => NetworkFile.Write(n with { Name = "changed" }, path));
+            Assert.Equal($"cannot write {path}: disk full (simulated)", e.Message);
         }
         finally
         {

@@ -20,9 +20,11 @@ public sealed class Version1FileTests
         Assert.Contains("\"version\": 2", written);
         Network converted = NetworkFile.Parse(written, "converted.study.json");
         Assert.Null(ModelComparer.FirstDifference(old, converted));
-        // The bundled demo is the converted file itself.
+        // The bundled demo grew from the converted file (motors, a 415 V board, fuller breaker ratings were added
+        // since): every line and every tap changer of the version 1 file reads as the demo gives it.
         Network bundled = NetworkFile.Read(Path.Combine(AppContext.BaseDirectory, "networks", name));
-        Assert.Null(ModelComparer.FirstDifference(old, bundled));
+        foreach (Line line in old.Lines) Assert.Equal(line, bundled.Lines.Single(l => l.Id == line.Id));
+        foreach (Transformer t in old.Transformers) Assert.Equal(t.Tap, bundled.Transformers.Single(b => b.Id == t.Id).Tap);
     }
 
     [Fact]

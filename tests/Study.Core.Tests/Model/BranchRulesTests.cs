@@ -80,6 +80,18 @@ public class BranchRulesTests
     }
 
     [Fact]
+    public void Rated_kv_about_1000_times_the_bus_base_kv_is_an_error_naming_the_unit_slip()
+    {
+        // 11 kV typed as 0.011 (MV) on an 11 kV bus: a ratio a thousand times off, which no study can use.
+        Network net = Clean();
+        net = net with { Transformers = net.Transformers.Change(1, t => t with { LvKv = 0.011 }) };
+        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Transformer, "T2", "lvKv");
+        Assert.Equal(Severity.Error, p.Severity);
+        Assert.Contains("rated kV 0.011 against bus base kV 11", p.Message);
+        Assert.Contains("probably in V or MV rather than kV", p.Message);
+    }
+
+    [Fact]
     public void Nameplate_and_ohm_data_on_a_bus_without_base_kv_are_errors()
     {
         Network net = Clean();

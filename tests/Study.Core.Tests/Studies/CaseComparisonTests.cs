@@ -32,7 +32,7 @@ public class CaseComparisonTests
         CaseComparisonResult r = StudyCase.Compare(StudyCase.Of(before), winter?.Name, StudyCase.Of(after), "winter-peak");
 
         var added = r.Buses.Where(b => b.Membership == CaseMembership.Added).ToList();
-        Assert.Equal(["CQ11", "CS11", "PS11"], added.Select(b => b.Id).Order());
+        Assert.Equal(["CQ11", "CS04", "CS11", "PS11"], added.Select(b => b.Id).Order());
         Assert.All(added, b => Assert.Null(b.BeforePu));
         Assert.All(added, b => Assert.NotNull(b.AfterPu));
         Assert.DoesNotContain(r.Buses, b => b.Membership == CaseMembership.Removed);

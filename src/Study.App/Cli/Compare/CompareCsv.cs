@@ -6,12 +6,9 @@ namespace Study.App.Cli.Compare;
 
 public static class CompareCsv
 {
-    public static void Write(CaseComparisonResult r, string dir)
-    {
-        Directory.CreateDirectory(dir);
-        CsvTable.Of(CompareColumns.Buses, r.Buses).Write(Path.Combine(dir, "buses.csv"));
-        CsvTable.Of(CompareColumns.Branches, r.Branches).Write(Path.Combine(dir, "branches.csv"));
-        CsvTable.Of(CompareColumns.Violations, CompareColumns.ViolationChanges(r)).Write(Path.Combine(dir, "violations.csv"));
-        CsvTable.Of(CompareColumns.Totals, CompareColumns.TotalChanges(r)).Write(Path.Combine(dir, "totals.csv"));
-    }
+    public static void Write(CaseComparisonResult r, string dir) => CsvTable.WriteSet(dir,
+        ("buses.csv", CsvTable.Of(CompareColumns.Buses, r.Buses)),
+        ("branches.csv", CsvTable.Of(CompareColumns.Branches, r.Branches)),
+        ("violations.csv", CsvTable.Of(CompareColumns.Violations, CompareColumns.ViolationChanges(r))),
+        ("totals.csv", CsvTable.Of(CompareColumns.Totals, CompareColumns.TotalChanges(r))));
 }

@@ -13,7 +13,7 @@ namespace Study.App.Cli.Faults;
 public sealed class FaultCommand : CliCommand
 {
     public override string Name => "fault";
-    public override string Summary => "fault levels (I''k, S''k, i_p) at buses and breaker duty, by IEC 60909 or from a solved load flow";
+    public override string Summary => "fault levels (I''k, S''k, i_p, I_b, i_DC, I_th) at buses and breaker duty, by IEC 60909 or from a solved load flow";
     protected override void Declare(Declaration d) => d
         .Positional("FILE", "a network file or IEEE Common Format case")
         .Many("bus", "ID", "fault these buses only (default: every bus)")
@@ -21,7 +21,11 @@ public sealed class FaultCommand : CliCommand
         .Many("type", "3ph,slg,ll,dlg", "fault types (default 3ph,slg)")
         .Value("zf", "R,X", "fault impedance in ohm (default 0,0: a bolted fault)")
         .Value("method", "iec60909|loadflow", "iec60909 (equivalent source c·Un/√3, default) or loadflow (pre-fault voltages from the load flow)")
-        .Flag("min", "minimum levels: c_min and each supply's scMvaMin")
+        .Flag("min", "minimum levels: c_min, each supply's scMvaMin, no motors, lines at --line-temp")
+        .Value("tmin", "S", "minimum time delay t_min for I_b and i_DC, s (default 0.1; breakers with minTripS use theirs)")
+        .Value("duration", "S", "fault duration T_k for the thermal current I_th, s (default 1)")
+        .Value("ib", "decay|conservative", "breaking current: decay of generators and motors by mu and q (default), or I_b = I''k")
+        .Value("line-temp", "C", "minimum levels: line conductor temperature at the end of the fault, °C (default 80)")
         .Value("scenario", "NAME", "scale loads as the named scenario does (matters for --method loadflow)")
         .Flag("json", "machine-readable result")
         .Value("markdown", "FILE", "write the report as Markdown, with the inputs and the caution, to attach to a study note")
@@ -52,6 +56,14 @@ public sealed class FaultCommand : CliCommand
             string other => throw new UsageException($"--method is iec60909 or loadflow, got '{other}'"),
         };
         var zf = args.Pair("zf") is (double r, double x) ? new Complex(r, x) : Complex.Zero;
+        BreakingCurrent breaking = args.Value("ib") switch
+        {
+            null or "decay" => BreakingCurrent.Decay,
+            "conservative" => BreakingCurrent.Conservative,
+            string other => throw new UsageException($"--ib is decay or conservative, got '{other}'"),
+        };
+        if (args.Value("line-temp") is not null && !args.Has("min"))
+            throw new UsageException("--line-temp sets the line temperature of minimum levels: give it with --min");
 
         var request = new FaultRequest
         {
@@ -61,6 +73,10 @@ public sealed class FaultCommand : CliCommand
             Method = method,
             Level = args.Has("min") ? FaultLevel.Min : FaultLevel.Max,
             Scenario = args.Value("scenario"),
+            TMinS = args.Number("tmin") ?? FaultRequest.Default.TMinS,
+            DurationS = args.Number("duration") ?? FaultRequest.Default.DurationS,
+            Breaking = breaking,
+            LineTemperatureC = args.Number("line-temp") ?? FaultRequest.Default.LineTemperatureC,
         };
         request.Validate();
 

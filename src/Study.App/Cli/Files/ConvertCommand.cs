@@ -17,8 +17,6 @@ public sealed class ConvertCommand : CliCommand
     {
         string input = args.Positional(0, "IN (the file to convert)");
         string output = args.Positional(1, "OUT (the network file to write, e.g. case.study.json)");
-        if (Path.GetFullPath(input) == Path.GetFullPath(output))
-            throw new UsageException("IN and OUT are the same file: choose another OUT so the original is kept");
         Network network = NetworkCheck.Read(input).Network;
         NetworkFile.Write(network, output);
         context.Out.WriteLine($"wrote {output}: {NetworkSummary.Describe(network)}");

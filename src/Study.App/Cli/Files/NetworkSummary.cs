@@ -13,6 +13,7 @@ public static class NetworkSummary
              + $"({n.Lines.Count} lines, {n.Transformers.Count + n.ThreeWindingTransformers.Count} transformers), "
              + $"{Plural(n.Supplies.Count + n.Generators.Count, "source", "sources")}, "
              + $"{Plural(n.Loads.Count, "load", "loads")}, {Plural(n.Shunts.Count, "shunt", "shunts")}, "
+             + (n.Motors.Count > 0 ? $"{Plural(n.Motors.Count, "motor", "motors")}, " : "")
              + $"{Plural(n.Breakers.Count, "breaker", "breakers")}, {Plural(n.Scenarios.Count, "scenario", "scenarios")}{kv}";
     }
 

@@ -6,10 +6,7 @@ namespace Study.App.Cli.Outages;
 
 public static class OutageCsv
 {
-    public static void Write(OutageScreeningResult r, string dir)
-    {
-        Directory.CreateDirectory(dir);
-        CsvTable.Of(OutageColumns.Outages, OutageColumns.Ranked(r)).Write(Path.Combine(dir, "outages.csv"));
-        CsvTable.Of(OutageColumns.NewViolations, OutageColumns.Violations(r)).Write(Path.Combine(dir, "new-violations.csv"));
-    }
+    public static void Write(OutageScreeningResult r, string dir) => CsvTable.WriteSet(dir,
+        ("outages.csv", CsvTable.Of(OutageColumns.Outages, OutageColumns.Ranked(r))),
+        ("new-violations.csv", CsvTable.Of(OutageColumns.NewViolations, OutageColumns.Violations(r))));
 }

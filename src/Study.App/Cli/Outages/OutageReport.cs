@@ -16,11 +16,32 @@ public static class OutageReport
 
     public static ReportDocument Build(string path, Network network, OutageScreeningResult r, LoadFlowOptions options)
     {
-        string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0].Scenario is null
-            ? "as entered" : "scenarios " + string.Join(", ", r.Scenarios.Select(s => s.Scenario));
         var doc = new ReportDocument($"Outage screening (N-1): {LoadFlowReport.Title(network, path)}");
-        LoadFlowReport.AddInputs(doc, path, network, scenarios, options);
+        LoadFlowReport.AddInputs(doc, path, network, Scenarios(r), options);
+        return Body(doc, r);
+    }
+
+    /// <summary>The report of merged parts, which name their network file but do not hold the network.</summary>
+    public static ReportDocument Merged(string path, string sha256, int parts, OutageScreeningResult r, LoadFlowOptions options)
+    {
+        var doc = new ReportDocument($"Outage screening (N-1): {path}, merged from {parts} shards");
+        doc.Input("file", path);
+        doc.Input("file SHA-256", sha256);
+        doc.Input("scenario", Scenarios(r));
+        doc.Input("options", LoadFlowReport.Options(options));
+        return Body(doc, r);
+    }
+
+    private static string Scenarios(OutageScreeningResult r) => r.Scenarios.Count == 1 && r.Scenarios[0].Scenario is null
+        ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios.Select(s => s.Scenario));
+
+    private static ReportDocument Body(ReportDocument doc, OutageScreeningResult r)
+    {
+        string scenarios = Scenarios(r);
         doc.Input("elements taken out", $"{r.Elements.Count}: {string.Join(", ", r.Elements)}");
+        if (r.Shard.Count > 1)
+            doc.Text($"Shard {r.Shard}: the outages numbered i with i mod {r.Shard.Count} = {r.Shard.Number - 1}, "
+                + $"{Integer(r.Scenarios.Sum(s => s.Outages.Count))} of {Integer(r.OutageCount)}; 'study merge' joins the shards' --json parts");
         doc.Text($"{r.Elements.Count} lines and transformers taken out one at a time in {scenarios}, each solved warm started from the intact case",
             "new = a violation the intact case of the same scenario does not have, or has by less; "
             + "worst V = the live bus nearest to (or furthest outside) its band; parallel = branches left between the same two buses",
@@ -31,7 +52,7 @@ public static class OutageReport
 
     private static void AddScenario(ReportDocument doc, ScenarioScreening s)
     {
-        string name = s.Scenario ?? "as entered";
+        string name = s.Scenario ?? "loads as entered";
         doc.Heading(s.IntactConverged
             ? $"Scenario {name}: intact case {Fixed(s.IntactLoadMw, 2)} MW load, {Count(s.IntactViolations.Count, "violation")}"
             : $"Scenario {name}: the intact case does not converge ({s.IntactMessage}); every violation below counts as new");

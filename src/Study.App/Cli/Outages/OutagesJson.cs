@@ -4,6 +4,7 @@ using Study.App.Cli.Solve;
 using Study.Core.Studies;
 
 using Study.App.Reports;
+
 namespace Study.App.Cli.Outages;
 
 /// <summary>A new violation: the element, its kind ("bus" or the branch kind), the limit broken ("low", "high", "overload").</summary>
@@ -27,6 +28,23 @@ public sealed record OutageJson(string Element, string Kind, bool Converged, IRe
 
 public sealed record OutagesJson(string? Scenario, IReadOnlyList<OutageJson> Outages)
 {
+    /// <summary>The result as `outages --json` prints it: one object, or an array when there are several scenarios.</summary>
+    public static void Write(CommandContext context, OutageScreeningResult result)
+    {
+        var json = result.Scenarios.Select(From).ToList();
+        if (json.Count == 1) CliJson.Write(context, json[0]);
+        else CliJson.Write(context, json);
+    }
+
+    /// <summary>Says on <paramref name="err"/> which intact cases did not converge; the exit code that follows.</summary>
+    public static int ReportIntactFailures(OutageScreeningResult result, string path, TextWriter err)
+    {
+        var failed = result.Scenarios.Where(s => !s.IntactConverged).ToList();
+        foreach (ScenarioScreening s in failed)
+            err.WriteLine($"error: {path}: the intact case ({s.Scenario ?? "loads as entered"}) did not converge: {s.IntactMessage}");
+        return failed.Count > 0 ? ExitCode.NoConvergence : ExitCode.Done;
+    }
+
     /// <summary>Only when the intact case itself did not converge (nothing to judge the outages against).</summary>
     [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
     public string? IntactMessage { get; init; }

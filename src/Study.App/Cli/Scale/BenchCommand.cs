@@ -18,14 +18,23 @@ public sealed class BenchCommand : CliCommand
         .Value("repeat", "N", "solves per size, the best one reported (default 3)")
         .Flag("no-faults", "skip the all-bus three-phase fault scan");
 
+    /// <summary>The largest network `study generate` makes (2,000,000 buses): a bench beyond it would only exhaust memory.</summary>
+    private const int MostBuses = 2_000_000;
+
+    /// <summary>More repeats than this measure nothing new; the best of a few is the figure reported.</summary>
+    private const int MostRepeats = 100;
+
     protected override int Execute(Arguments args, CommandContext context)
     {
         var sizes = args.Values("sizes").Select(s => int.TryParse(s, out int v) && v >= 2 ? v
-            : throw new UsageException($"--sizes takes whole numbers of buses, got '{s}'")).ToList();
+            : throw new UsageException($"--sizes takes whole numbers of buses, 2 or more, got '{s}'")).ToList();
+        // Checked before anything is generated, so a slip of a few zeros ends at once instead of filling memory.
+        if (sizes.FirstOrDefault(n => n > MostBuses) is int tooMany and > 0)
+            throw new UsageException($"--sizes: {tooMany} buses is more than the generator makes ({MostBuses:N0} at most)");
         if (sizes.Count == 0) sizes = [1000, 10000, 100000];
         int seed = args.Integer("seed") ?? 1;
         int repeat = args.Integer("repeat") ?? 3;
-        if (repeat < 1) throw new UsageException("--repeat must be at least 1");
+        if (repeat < 1 || repeat > MostRepeats) throw new UsageException($"--repeat must be between 1 and {MostRepeats}");
 
         context.Out.WriteLine($"machine: {Environment.ProcessorCount} cores, {Environment.OSVersion}, .NET {Environment.Version}; best of {repeat} solves, flat start");
         // The engine references no MathNet provider (MathNet is a test-only reference), so there is none to report.

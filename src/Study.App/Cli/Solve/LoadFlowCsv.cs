@@ -6,12 +6,9 @@ namespace Study.App.Cli.Solve;
 
 public static class LoadFlowCsv
 {
-    public static void Write(LoadFlowResult r, string dir)
-    {
-        Directory.CreateDirectory(dir);
-        CsvTable.Of(LoadFlowColumns.Buses(), r.Buses).Write(Path.Combine(dir, "buses.csv"));
-        CsvTable.Of(LoadFlowColumns.Branches, r.Branches).Write(Path.Combine(dir, "branches.csv"));
-        CsvTable.Of(LoadFlowColumns.Taps, r.Taps).Write(Path.Combine(dir, "taps.csv"));
-        CsvTable.Of(LoadFlowColumns.Violations, r.Violations).Write(Path.Combine(dir, "violations.csv"));
-    }
+    public static void Write(LoadFlowResult r, string dir) => CsvTable.WriteSet(dir,
+        ("buses.csv", CsvTable.Of(LoadFlowColumns.Buses(), r.Buses)),
+        ("branches.csv", CsvTable.Of(LoadFlowColumns.Branches, r.Branches)),
+        ("taps.csv", CsvTable.Of(LoadFlowColumns.Taps, r.Taps)),
+        ("violations.csv", CsvTable.Of(LoadFlowColumns.Violations, r.Violations)));
 }

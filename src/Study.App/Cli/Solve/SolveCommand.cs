@@ -59,8 +59,11 @@ public sealed class SolveCommand : CliCommand
             MatrixMarket.Write(result.Jacobian, jacobianPath,
                 $"load-flow Jacobian at the {(result.Converged ? "converged" : "last")} state of {network.Name}\n"
                 + "rows: dP then dQ (dV for PV buses) of the unknown buses; columns: angle then |V|");
-        if (args.Value("csv") is string dir)
+        // A load flow that did not converge has no tables: the previous set stays as it was.
+        if (args.Value("csv") is string dir && result.Converged)
             LoadFlowCsv.Write(result, dir);
+        else if (args.Value("csv") is string kept)
+            context.Err.WriteLine($"note: no tables written to {kept}: the load flow did not converge (any earlier tables there are left as they were)");
         bool json = args.Has("json");
         string? markdown = args.Value("markdown");
         // The readable report is built only when something shows it: --json alone never does.

@@ -6,10 +6,7 @@ namespace Study.App.Cli.Taps;
 
 public static class TapStudyCsv
 {
-    public static void Write(TapStudyResult r, string dir)
-    {
-        Directory.CreateDirectory(dir);
-        CsvTable.Of(TapStudyColumns.Points(r), r.Points).Write(Path.Combine(dir, "positions.csv"));
-        CsvTable.Of(TapStudyColumns.Recommended, TapStudyColumns.Ranked(r)).Write(Path.Combine(dir, "recommended.csv"));
-    }
+    public static void Write(TapStudyResult r, string dir) => CsvTable.WriteSet(dir,
+        ("positions.csv", CsvTable.Of(TapStudyColumns.Points(r), r.Points)),
+        ("recommended.csv", CsvTable.Of(TapStudyColumns.Recommended, TapStudyColumns.Ranked(r))));
 }

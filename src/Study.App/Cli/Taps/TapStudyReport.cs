@@ -25,6 +25,7 @@ public static class TapStudyReport
         doc.Text($"positions {r.Min}..{r.Max} at {Fixed(r.StepPercent, 2)} % a step (file position {r.FilePosition}); "
                + $"watching {string.Join(", ", r.WatchBuses)}; band {band}; {scenarios}");
         doc.SpacedText($"Finding: {r.Finding}");
+        if (r.Notes.Count > 0) doc.List(r.Notes.Select(n => "note: " + n));
         if (r.Recommended.Count > 0) doc.Table(TapStudyColumns.Recommended, TapStudyColumns.Ranked(r), spaceBefore: true);
         doc.Heading("Every position (▼ below the band, ▲ above)").Table(TapStudyColumns.Points(r), r.Points);
         return doc.Add(new ReportFigure(Chart(r)) { SpaceBefore = true });

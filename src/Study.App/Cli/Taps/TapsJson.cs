@@ -12,6 +12,10 @@ public sealed record TapsPositionJson(int Position, double Ratio, string? Scenar
     /// <summary>Present (false) only for a position whose load flow did not converge.</summary>
     [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
     public bool? Converged { get; init; }
+
+    /// <summary>Present (true) only for a position where only a collapsed, low-voltage solution was found (never recommended).</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public bool? LowVoltage { get; init; }
 }
 
 public sealed record TapsRecommendedJson(int Position, double MarginPu);
@@ -20,6 +24,9 @@ public sealed record TapsJson(string Transformer, IReadOnlyList<TapsPositionJson
 {
     public string Finding { get; init; } = "";
 
+    /// <summary>Positions solved again from flat start, and why.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     public static TapsJson From(TapStudyResult r) => new(
         r.Transformer,
         r.Points.Select(p => new TapsPositionJson(p.Position, p.Ratio, p.Scenario,
@@ -27,9 +34,11 @@ public sealed record TapsJson(string Transformer, IReadOnlyList<TapsPositionJson
             p.Converged ? p.VMinPu : null, p.Converged ? p.VMaxPu : null, p.Converged ? p.LossMw : null, p.Violations)
         {
             Converged = p.Converged ? null : false,
+            LowVoltage = p.LowVoltage ? true : null,
         }).ToList(),
         r.Recommended.Select(x => new TapsRecommendedJson(x.Position, x.MarginPu)).ToList())
     {
         Finding = r.Finding,
+        Notes = r.Notes,
     };
 }

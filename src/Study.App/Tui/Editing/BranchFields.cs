@@ -68,7 +68,7 @@ public static class BranchFields
         .. WindingFields.Earthing<Transformer>("HV", "hvNeutral", e => e.HvNeutral, (e, n) => e with { HvNeutral = n }),
         .. WindingFields.Earthing<Transformer>("LV", "lvNeutral", e => e.LvNeutral, (e, n) => e with { LvNeutral = n }),
         .. TapFields.For<Transformer>(e => e.Tap, (e, t) => e with { Tap = TapFields.Normalise(t) }),
-        Field.Number<Transformer>("Phase shift", "°", 0, e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }).Keyed("phaseShiftDeg"),
+        Field.Optional<Transformer>("Phase shift", "°", "= vector group", e => e.PhaseShiftDeg, (e, v) => e with { PhaseShiftDeg = v }).Keyed("phaseShiftDeg"),
         .. WindingFields.NoLoad<Transformer>(e => e.NoLoad, (e, n) => e with { NoLoad = n }),
         Field.Optional<Transformer>("Loading rating", "MVA", "= rating", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
         Field.Optional<Transformer>("R (per-unit form)", "pu", "", e => e.RPu, (e, v) => e with { RPu = v }).Keyed("rPu"),

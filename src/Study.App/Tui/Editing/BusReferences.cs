@@ -41,6 +41,7 @@ public static class BusReferences
             Check(ElementKind.ThreeWindingTransformer, e.Id, "lv", e.Lv);
             Check(ElementKind.ThreeWindingTransformer, e.Id, "regulated bus", e.Tap?.Regulate?.Bus);
         }
+        foreach (Motor e in n.Motors) Check(ElementKind.Motor, e.Id, "bus", e.Bus);
         foreach (Breaker e in n.Breakers) Check(ElementKind.Breaker, e.Id, "bus", e.Bus);
         return refs;
     }
@@ -79,6 +80,7 @@ public static class BusReferences
             Transformers = n.Transformers.Select(e => e with { Hv = R(e.Hv), Lv = R(e.Lv), Tap = Tap(e.Tap) }).ToList(),
             ThreeWindingTransformers = n.ThreeWindingTransformers
                 .Select(e => e with { Hv = R(e.Hv), Mv = R(e.Mv), Lv = R(e.Lv), Tap = Tap(e.Tap) }).ToList(),
+            Motors = n.Motors.Select(e => e with { Bus = R(e.Bus) }).ToList(),
             Breakers = n.Breakers.Select(e => e with { Bus = R(e.Bus) }).ToList(),
         };
     }

@@ -247,10 +247,12 @@ public sealed class EditSession
     {
         try
         {
+            // The per-user folder is the program's own: made when first needed (output never creates folders).
+            if (System.IO.Path.GetDirectoryName(RecoveryPath) == userFolder) Directory.CreateDirectory(userFolder);
             NetworkFile.Write(Network, RecoveryPath);
             RecoveryError = null;
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or InputException)
         {
             string fallback = RecoveryFile.PathFor(Path, true, userFolder);
             if (fallback == RecoveryPath)

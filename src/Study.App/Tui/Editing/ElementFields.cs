@@ -16,6 +16,7 @@ public static class ElementFields
         ElementKind.Line => BranchFields.Line,
         ElementKind.Transformer => BranchFields.Transformer,
         ElementKind.ThreeWindingTransformer => BranchFields.ThreeWinding,
+        ElementKind.Motor => NodeFields.Motor,
         ElementKind.Breaker => NodeFields.Breaker,
         _ => NodeFields.Scenario,
     };
@@ -53,6 +54,7 @@ public static class ElementFields
             ElementKind.Line => new Line { Id = Id("F"), From = Bus(0), To = Bus(1), Km = 1 },
             ElementKind.Transformer => new Transformer { Id = Id("T"), Hv = Bus(0), Lv = Bus(1) },
             ElementKind.ThreeWindingTransformer => new ThreeWindingTransformer { Id = Id("T"), Hv = Bus(0), Mv = Bus(1), Lv = Bus(2) },
+            ElementKind.Motor => new Motor { Id = Id("M"), Bus = Bus(0) },
             ElementKind.Breaker => new Breaker { Id = Id("CB"), Bus = Bus(0) },
             _ => new Scenario { Name = Id("scenario-") },
         };

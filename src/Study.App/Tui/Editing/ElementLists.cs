@@ -29,6 +29,7 @@ public static class ElementLists
         new ElementList<Transformer>(ElementKind.Transformer, n => n.Transformers, (n, l) => n with { Transformers = l }, e => e.Id, (e, id) => e with { Id = id }),
         new ElementList<ThreeWindingTransformer>(ElementKind.ThreeWindingTransformer, n => n.ThreeWindingTransformers,
             (n, l) => n with { ThreeWindingTransformers = l }, e => e.Id, (e, id) => e with { Id = id }),
+        new ElementList<Motor>(ElementKind.Motor, n => n.Motors, (n, l) => n with { Motors = l }, e => e.Id, (e, id) => e with { Id = id }),
         new ElementList<Breaker>(ElementKind.Breaker, n => n.Breakers, (n, l) => n with { Breakers = l }, e => e.Id, (e, id) => e with { Id = id }),
         new ElementList<Scenario>(ElementKind.Scenario, n => n.Scenarios, (n, l) => n with { Scenarios = l }, e => e.Name, (e, id) => e with { Name = id }),
     }.ToDictionary(l => l.Kind);

@@ -1,4 +1,4 @@
-// Field lists of buses and of what sits at one bus: loads, shunts, breakers; and scenarios.
+// Field lists of buses and of what sits at one bus: loads, shunts, motors, breakers; and scenarios.
 using Study.Core.Model;
 
 namespace Study.App.Tui.Editing;
@@ -40,6 +40,22 @@ public static class NodeFields
         Field.Number<Shunt>("Q (+cap)", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
         Field.Number<Shunt>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
         Field.Flag<Shunt>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
+    ];
+
+    /// <summary>A first field list for motors (the nameplate a study needs); starters are edited in the file for now.</summary>
+    public static IReadOnlyList<ElementField> Motor { get; } =
+    [
+        Field.Id<Motor>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
+        Field.Id<Motor>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.Optional<Motor>("Rated output", "MW", "", e => e.Mw, (e, v) => e with { Mw = v }).Keyed("mw"),
+        Field.Optional<Motor>("Rated", "kV", "", e => e.Kv, (e, v) => e with { Kv = v }).Keyed("kv"),
+        Field.Optional<Motor>("Power factor", "", "", e => e.PowerFactor, (e, v) => e with { PowerFactor = v }).Keyed("powerFactor"),
+        Field.Optional<Motor>("Efficiency", "", "", e => e.Efficiency, (e, v) => e with { Efficiency = v }).Keyed("efficiency"),
+        Field.Integer<Motor>("Units", "", 1, e => e.Units, (e, v) => e with { Units = v }).Keyed("units"),
+        Field.Optional<Motor>("Locked-rotor current", "× rated", "", e => e.LockedRotor?.CurrentRatio,
+            (e, v) => e with { LockedRotor = (e.LockedRotor ?? new LockedRotor()) with { CurrentRatio = v } }).Keyed("lockedRotor.currentRatio"),
+        Field.Optional<Motor>("Running load", "%", "100", e => e.LoadPercent, (e, v) => e with { LoadPercent = v }).Keyed("loadPercent"),
+        Field.Flag<Motor>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
     public static IReadOnlyList<ElementField> Breaker { get; } =

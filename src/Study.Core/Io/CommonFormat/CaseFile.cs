@@ -7,10 +7,14 @@ namespace Study.Core.Io.CommonFormat;
 /// <summary>The cards of one case, in file order.</summary>
 internal sealed partial record CaseFile(TitleCard Title, IReadOnlyList<BusCard> Buses, IReadOnlyList<BranchCard> Branches)
 {
+    /// <summary>Line numbers of the non-blank lines before the title card, which are skipped (a comment, a tape label).</summary>
+    public IReadOnlyList<int> SkippedLines { get; init; } = [];
+
     private enum Section { Preamble, Bus, Branch, Skipped }
 
     /// <summary>
-    /// Reads the title card (the first non-blank line), then the sections. BUS DATA and BRANCH DATA end
+    /// Reads the title card (the last non-blank line before BUS DATA FOLLOWS: archive files may carry a
+    /// tape label or comments above it, which are skipped), then the sections. BUS DATA and BRANCH DATA end
     /// with a -999 line; any other section (loss zones, interchange, tie lines) is skipped up to the next
     /// header, because archive files do not close those consistently (-99, -9, or the -9 before the data).
     /// <c>END OF DATA</c> ends the file.
@@ -19,6 +23,7 @@ internal sealed partial record CaseFile(TitleCard Title, IReadOnlyList<BusCard> 
     {
         List<string> lines = SplitLines(text);
         TitleCard? title = null;
+        var preamble = new List<int>();
         var buses = new List<BusCard>();
         var branches = new List<BranchCard>();
         int busHeader = 0, branchHeader = 0;
@@ -38,12 +43,21 @@ internal sealed partial record CaseFile(TitleCard Title, IReadOnlyList<BusCard> 
             {
                 string name = header.Groups[1].Value;
                 if (open is Section.Bus or Section.Branch) throw NotClosed(open, fileName, number, $"'{name} FOLLOWS'");
+                Section before = open;
                 open = Section.Skipped;
                 if (name == "BUS DATA")
                 {
                     if (busHeader > 0) throw Twice(name, busHeader, fileName, number);
-                    if (title is null)
-                        throw new InputException("no title card before 'BUS DATA FOLLOWS'", fileName, number, 1);
+                    if (before == Section.Preamble)
+                    {
+                        if (preamble.Count == 0)
+                            throw new InputException("no title card before 'BUS DATA FOLLOWS'", fileName, number, 1);
+                        int titleLine = preamble[^1];
+                        title = TitleCard.Read(new Card(lines[titleLine - 1], titleLine, "title", fileName));
+                        preamble.RemoveAt(preamble.Count - 1);
+                    }
+                    else if (title is null)
+                        throw new InputException("no title card before 'BUS DATA FOLLOWS' (a section comes first)", fileName, number, 1);
                     busHeader = number;
                     open = Section.Bus;
                 }
@@ -59,7 +73,7 @@ internal sealed partial record CaseFile(TitleCard Title, IReadOnlyList<BusCard> 
             switch (open)
             {
                 case Section.Preamble:
-                    title ??= TitleCard.Read(new Card(line, number, "title", fileName));
+                    preamble.Add(number);
                     break;
                 case Section.Bus or Section.Branch when IsSectionEnd(line):
                     open = Section.Skipped;
@@ -80,7 +94,7 @@ internal sealed partial record CaseFile(TitleCard Title, IReadOnlyList<BusCard> 
         if (busHeader == 0) throw new InputException("no 'BUS DATA FOLLOWS' section", fileName, 1, 1);
         if (buses.Count == 0) throw new InputException("the BUS DATA section holds no bus cards", fileName, busHeader, 1);
         if (branchHeader == 0) throw new InputException("no 'BRANCH DATA FOLLOWS' section", fileName, Math.Max(lines.Count, 1), 1);
-        return new CaseFile(title!, buses, branches);
+        return new CaseFile(title!, buses, branches) { SkippedLines = preamble };
     }
 
     /// <summary>Lines ended by CRLF, LF or CR; a leading byte-order mark is not a column.</summary>

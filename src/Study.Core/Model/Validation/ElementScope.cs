@@ -13,6 +13,10 @@ internal readonly struct ElementScope(ValidationContext context, ElementKind kin
 
     public void Warning(string? field, string message) => context.Add(Severity.Warning, kind, id, field, message);
 
+    /// <summary>A warning that becomes an error when the value is a unit slip (about 1000 times off), which no study can use.</summary>
+    public void WarningUnlessUnitSlip(bool unitSlip, string? field, string message) =>
+        context.Add(unitSlip ? Severity.Error : Severity.Warning, kind, id, field, message);
+
     /// <summary>Reports every NaN or infinite value; absent (null) values are fine. True when all are finite.</summary>
     public bool AllFinite(params ReadOnlySpan<(string Field, double? Value)> values)
     {

@@ -10,7 +10,8 @@ internal static class IdRules
         Network n = context.Network;
         // Sized for every element at once, so a 10k-bus network is indexed without rehashing.
         int capacity = Count(n.Buses) + Count(n.Supplies) + Count(n.Generators) + Count(n.Loads) + Count(n.Shunts)
-            + Count(n.Lines) + Count(n.Transformers) + Count(n.ThreeWindingTransformers) + Count(n.Breakers) + Count(n.Scenarios);
+            + Count(n.Lines) + Count(n.Transformers) + Count(n.ThreeWindingTransformers) + Count(n.Motors) + Count(n.Breakers)
+            + Count(n.Scenarios);
         var first = new Dictionary<(ElementFamily, string), Entry>(capacity);
         foreach (Entry entry in Entries(context.Network))
         {
@@ -59,6 +60,7 @@ internal static class IdRules
         ElementKind.Line => "lines",
         ElementKind.Transformer => "transformers",
         ElementKind.ThreeWindingTransformer => "threeWindingTransformers",
+        ElementKind.Motor => "motors",
         ElementKind.Breaker => "breakers",
         _ => "scenarios",
     };
@@ -70,7 +72,7 @@ internal static class IdRules
         ElementFamily.Bus => "buses",
         ElementFamily.Source => "supplies and generators",
         ElementFamily.Branch => "lines, transformers and three-winding transformers",
-        ElementFamily.LoadOrShunt => "loads and shunts",
+        ElementFamily.LoadOrShunt => "loads, shunts and motors",
         ElementFamily.Breaker => "breakers",
         _ => "scenarios",
     };
@@ -102,6 +104,7 @@ internal static class IdRules
         foreach (Entry e in Of(ElementKind.Line, network.Lines, l => l.Id)) yield return e;
         foreach (Entry e in Of(ElementKind.Transformer, network.Transformers, t => t.Id)) yield return e;
         foreach (Entry e in Of(ElementKind.ThreeWindingTransformer, network.ThreeWindingTransformers, t => t.Id)) yield return e;
+        foreach (Entry e in Of(ElementKind.Motor, network.Motors, m => m.Id)) yield return e;
         foreach (Entry e in Of(ElementKind.Breaker, network.Breakers, b => b.Id)) yield return e;
         foreach (Entry e in Of(ElementKind.Scenario, network.Scenarios, s => s.Name)) yield return e;
     }

@@ -6,6 +6,9 @@ internal static class LineRules
     /// <summary>A line joins buses of one voltage; beyond this difference a transformer is probably missing.</summary>
     private const double KvMismatch = 0.2;
 
+    /// <summary>Beyond this a length in km is more likely metres: AC lines stop well short of it.</summary>
+    private const double LongestKm = 1500;
+
     public static void Check(ValidationContext context, Line line)
     {
         ElementScope at = context.At(ElementKind.Line, line.Id);
@@ -31,9 +34,20 @@ internal static class LineRules
             RequireBaseKv(at, "to", to);
         }
         if (from is { Kv: > 0 } && to is { Kv: > 0 } && Numbers.RelativeDifference(to.Kv, from.Kv) > KvMismatch)
-            at.Warning("to", $"joins bus {from.Id} ({Numbers.Show(from.Kv)} kV) and bus {to.Id} ({Numbers.Show(to.Kv)} kV): " +
-                "a line joins buses of one voltage; is a transformer missing, or a bus kv wrong?");
+            at.WarningUnlessUnitSlip(Plausibility.KvHint(from.Kv, to.Kv).Length > 0, "to", $"joins bus {from.Id} ({Numbers.Show(from.Kv)} kV) and bus {to.Id} ({Numbers.Show(to.Kv)} kV): " +
+                $"a line joins buses of one voltage; is a transformer missing, or a bus kv wrong?{Plausibility.KvHint(from.Kv, to.Kv)}");
+        if (line.Km is double length && double.IsFinite(length) && length > LongestKm)
+            at.Warning("km", $"km {Numbers.Show(length)} is longer than any AC line (up to about {Numbers.Show(LongestKm)} km): is it in metres?");
+        if (line.Z1 is { } z1 && Finite(z1))
+        {
+            Plausibility.PerKm(at, "z1", z1);
+            if (Plausibility.LineOnSystemBase(z1, line.Km, from, context.Network.BaseMva) is double zPu)
+                Plausibility.SeriesOnSystemBase(at, "z1", zPu);
+        }
+        if (line.Z0 is { } z0 && Finite(z0)) Plausibility.PerKm(at, "z0", z0);
     }
+
+    private static bool Finite(SequenceImpedance z) => double.IsFinite(z.R) && double.IsFinite(z.X);
 
     /// <summary>
     /// One sequence: finite numbers; per km needs the length; charging not negative. The positive

@@ -21,9 +21,12 @@ public static class NetworkValidator
         Each(context, ElementKind.Line, network.Lines, LineRules.Check);
         Each(context, ElementKind.Transformer, network.Transformers, TransformerRules.Check);
         Each(context, ElementKind.ThreeWindingTransformer, network.ThreeWindingTransformers, ThreeWindingRules.Check);
+        Each(context, ElementKind.Motor, network.Motors, MotorRules.Check);
         Each(context, ElementKind.Breaker, network.Breakers, BreakerRules.Check);
         Each(context, ElementKind.Scenario, network.Scenarios, ScenarioRules.Check);
+        SetPointRules.Check(context);
         TopologyRules.Check(context);
+        PhaseDisplacementRules.Check(context);
         return new ValidationReport(context.Problems);
     }
 
@@ -49,6 +52,7 @@ public static class NetworkValidator
             case ElementKind.ThreeWindingTransformer:
                 Matching(context, network.ThreeWindingTransformers, t => t.Id, id, ThreeWindingRules.Check);
                 break;
+            case ElementKind.Motor: Matching(context, network.Motors, m => m.Id, id, MotorRules.Check); break;
             case ElementKind.Breaker: Matching(context, network.Breakers, b => b.Id, id, BreakerRules.Check); break;
             case ElementKind.Scenario: Matching(context, network.Scenarios, s => s.Name, id, ScenarioRules.Check); break;
         }

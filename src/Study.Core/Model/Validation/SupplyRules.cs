@@ -17,6 +17,9 @@ internal static class SupplyRules
         if (supply.ScMvaMin > supply.ScMvaMax)
             at.Error("scMvaMin", $"scMvaMin {Numbers.Show(supply.ScMvaMin.Value)} MVA is above scMvaMax " +
                 $"{Numbers.Show(supply.ScMvaMax.Value)} MVA: the minimum fault level cannot exceed the maximum");
+        // The strongest grids declare a few hundred thousand MVA at EHV; far beyond that the figure is in VA or kVA.
+        if (supply.ScMvaMax is double sc && double.IsFinite(sc) && sc > 1e6)
+            at.Warning("scMvaMax", $"scMvaMax {Numbers.Show(sc)} MVA is beyond any grid's fault level (up to about 100000 MVA): is it in kVA or VA?");
         at.Positive("xr", supply.Xr, "the supply X/R ratio");
         at.Positive("z0z1", supply.Z0Z1, "the ratio Z0/Z1 of the supply impedance");
     }

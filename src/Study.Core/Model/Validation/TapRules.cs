@@ -6,6 +6,9 @@ internal static class TapRules
     /// <summary>Steps above this are rare (0.6 to 2.5 % is usual); a larger figure is often the whole range.</summary>
     private const double LargestUsualStepPercent = 5;
 
+    /// <summary>On-load changers have up to about 35 positions (±16 is common); far more is a slip in the range.</summary>
+    private const int MostUsualPositions = 100;
+
     public static void Check(ElementScope at, TapChanger? tap, bool hasMvWinding)
     {
         if (tap is null) return;
@@ -18,6 +21,9 @@ internal static class TapRules
             at.Error("tap.range", $"tap.range {range} runs backwards: give the lowest position first");
         else if (!tap.Range.Contains(tap.Position))
             at.Error("tap.position", $"tap.position {Numbers.Show(tap.Position)} is outside the range {range}");
+        if (lowest <= highest && (long)highest - lowest + 1 > MostUsualPositions)
+            at.Warning("tap.range", $"tap.range {range} has {Numbers.Show((double)highest - lowest + 1)} positions: tap changers have up to " +
+                "about 35; check the range");
         if (lowest < highest && tap.PercentPerStep <= 0)
             at.Error("tap.percentPerStep", $"tap.percentPerStep is {Numbers.Show(tap.PercentPerStep)} with a range {range}: " +
                 "give the voltage change of one step in percent, above 0");

@@ -35,7 +35,10 @@ internal static class ThreeWindingRules
         PairImpedance(at, "zHmPercent", t.ZHmPercent);
         PairImpedance(at, "zHlPercent", t.ZHlPercent);
         PairImpedance(at, "zMlPercent", t.ZMlPercent);
-        if (finite) StarBranches(at, t);
+        Plausibility.Percent(at, "zHmPercent", t.ZHmPercent);
+        Plausibility.Percent(at, "zHlPercent", t.ZHlPercent);
+        Plausibility.Percent(at, "zMlPercent", t.ZMlPercent);
+        if (finite) StarBranches(at, t, context.Network.BaseMva);
 
         VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: true);
         EarthingRules.Check(at, "hvNeutral", t.HvNeutral);
@@ -45,6 +48,7 @@ internal static class ThreeWindingRules
             at.Error("mvaHv", "mvaHv is 0: noLoad is stated on the hv rating, so give mvaHv in MVA");
         TransformerRules.CheckNoLoad(at, t.NoLoad, t.MvaHv);
         TapRules.Check(at, t.Tap, hasMvWinding: true);
+        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: true);
     }
 
     /// <summary>A pairwise short-circuit impedance is measured between two windings: always above 0.</summary>
@@ -61,7 +65,7 @@ internal static class ThreeWindingRules
     /// conventions) can come out negative; that is real and solvable, so a warning only. A star
     /// branch of exactly zero would be a zero-impedance branch to the star point: an error.
     /// </summary>
-    private static void StarBranches(ElementScope at, ThreeWindingTransformer t)
+    private static void StarBranches(ElementScope at, ThreeWindingTransformer t, double baseMva)
     {
         if (t.ZHmPercent <= 0 || t.ZHlPercent <= 0 || t.ZMlPercent <= 0) return;
         (string Name, double Z)[] star =
@@ -78,6 +82,9 @@ internal static class ThreeWindingRules
             else if (z < 0)
                 at.Warning("zHmPercent", $"the {name} star branch comes out at {Numbers.Show(z)} % (negative reactance) " +
                     "from zHmPercent, zHlPercent and zMlPercent: accepted, as real windings can give this; check the three values");
+            // On the system base: z / 100 · S_base / zBaseMva (DEVELOPERS.md, Per-unit rules).
+            if (z != 0 && t.ZBaseMva > 0 && baseMva > 0 && double.IsFinite(baseMva))
+                Plausibility.SeriesOnSystemBase(at, "zHmPercent", Math.Abs(z) / 100 * baseMva / t.ZBaseMva);
         }
     }
 }

@@ -33,15 +33,19 @@ internal static class TopologyRules
 
         var sources = new List<string>?[buses.Count];
         var hasSlack = new bool[buses.Count];
+        var slacks = new List<Slack>?[buses.Count];
         foreach (Supply? s in ValidationContext.Items(network.Supplies))
         {
             // A supply point is a slack source (README, Network files).
-            if (s is { InService: true }) AddSource(islands, index, sources, hasSlack, s.Bus, s.Id, slack: true);
+            if (s is not { InService: true }) continue;
+            AddSource(islands, index, sources, hasSlack, s.Bus, s.Id, slack: true);
+            AddSlack(islands, index, slacks, new Slack(ElementKind.Supply, s.Id, s.Bus, s.AngleDeg));
         }
         foreach (Generator? g in ValidationContext.Items(network.Generators))
         {
-            if (g is { InService: true })
-                AddSource(islands, index, sources, hasSlack, g.Bus, g.Id, slack: g.Mode == GeneratorMode.Slack);
+            if (g is not { InService: true }) continue;
+            AddSource(islands, index, sources, hasSlack, g.Bus, g.Id, slack: g.Mode == GeneratorMode.Slack);
+            if (g.Mode == GeneratorMode.Slack) AddSlack(islands, index, slacks, new Slack(ElementKind.Generator, g.Id, g.Bus, g.AngleDeg ?? 0));
         }
 
         var members = new Dictionary<int, List<Bus>>();
@@ -62,7 +66,37 @@ internal static class TopologyRules
                     $"no slack source in the island containing {BusList(island)}, which is fed only by " +
                     $"{string.Join(", ", found)}: the load flow needs one angle reference per island; " +
                     "add a supply or set one generator's mode to slack");
+            else if (slacks[root] is { } held && held.Select(h => h.Bus).Distinct().Count() > 1)
+                SeveralSlackBuses(context, held);
         }
+    }
+
+    private sealed record Slack(ElementKind Kind, string? Id, string? Bus, double AngleDeg);
+
+    private static void AddSlack(DisjointSets islands, Dictionary<string, int> index, List<Slack>?[] slacks, Slack slack)
+    {
+        if (slack.Bus is null || !index.TryGetValue(slack.Bus, out int i)) return;
+        (slacks[islands.Find(i)] ??= []).Add(slack);
+    }
+
+    /// <summary>
+    /// Two slack buses in one island both hold their voltage and angle, so the power exchanged between
+    /// them is fixed by those set points, not by the network's needs (and not shared as one infeed
+    /// would be). Solvable, hence a warning; it names the reference and the other slack.
+    /// </summary>
+    private static void SeveralSlackBuses(ValidationContext context, List<Slack> held)
+    {
+        Slack reference = held[0];
+        Slack other = held.First(h => h.Bus != reference.Bus);
+        int buses = held.Select(h => h.Bus).Distinct().Count();
+        string angles = Math.Abs(other.AngleDeg - reference.AngleDeg) > 1e-9
+            ? $"; their angles differ by {Numbers.Show(Math.Abs(other.AngleDeg - reference.AngleDeg))}°"
+            : "";
+        context.At(other.Kind, other.Id).Warning(other.Kind == ElementKind.Supply ? "bus" : "mode",
+            $"{Numbers.Show(buses)} slack buses in one island: {ElementKinds.Label(reference.Kind)} {reference.Id} at bus {reference.Bus} " +
+            $"and {ElementKinds.Label(other.Kind)} {other.Id} at bus {other.Bus}{angles}. Each holds its voltage and angle, so the power " +
+            $"between them is set by those set points rather than by the network; {reference.Id} is the angle reference. " +
+            "If one infeed is meant, keep one slack and make the other a pv generator");
     }
 
     private static void Join(DisjointSets islands, Dictionary<string, int> index, params ReadOnlySpan<string?> ends)

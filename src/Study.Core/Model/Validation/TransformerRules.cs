@@ -24,6 +24,10 @@ internal static class TransformerRules
 
         if (t.Units < 1)
             at.Error("units", $"units is {Numbers.Show(t.Units)}: give the number of identical units in the bank, 1 or more");
+        else
+            Plausibility.Units(at, t.Units);
+        if (SystemBaseImpedance(t, lv, context.Network.BaseMva) is double zPu)
+            Plausibility.SeriesOnSystemBase(at, form == perUnit ? "xPu" : "zPercent", zPu);
         at.NotNegative("ratingMva", t.RatingMva, "a thermal rating (MVA)");
         at.Positive("xr", t.Xr, "the X/R ratio");
         at.Positive("z0Percent", t.Z0Percent, "the zero-sequence impedance (percent)");
@@ -32,6 +36,7 @@ internal static class TransformerRules
         EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
         if (form == nameplate) CheckNoLoad(at, t.NoLoad, t.Mva);
         TapRules.Check(at, t.Tap, hasMvWinding: false);
+        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: false);
     }
 
     /// <summary>
@@ -68,6 +73,10 @@ internal static class TransformerRules
         else if (t.ZPercent < 0)
             at.Error("zPercent", $"zPercent is {Numbers.Show(t.ZPercent.Value)}: the nameplate impedance is a magnitude, " +
                 "above 0 (give a negative reactance in per-unit form, xPu)");
+        Plausibility.Percent(at, "zPercent", t.ZPercent);
+        Plausibility.Percent(at, "z0Percent", t.Z0Percent);
+        if (t.Mva is double mva && double.IsFinite(mva) && mva > LargestUnitMva)
+            at.Warning("mva", $"mva {Numbers.Show(mva)} is beyond any transformer unit (the largest are about 2000 MVA): is it in kVA?");
         bool swapped = WindingKvRules.Check(at, ", or give the transformer as rPu, xPu and ratio",
             new Winding("hv", "hvKv", t.HvKv, hv), new Winding("lv", "lvKv", t.LvKv, lv));
         if (!swapped) WindingKvRules.CheckOrder(at, "hvKv", t.HvKv, "lvKv", t.LvKv);
@@ -87,6 +96,25 @@ internal static class TransformerRules
         }
         if (t.NoLoad is not null)
             at.Error("noLoad", "noLoad needs the nameplate form (mva, hvKv, lvKv, zPercent, xr): give the magnetising branch as bPu instead");
+    }
+
+    /// <summary>Larger than any transformer unit built: a rating this large is kVA typed as MVA.</summary>
+    private const double LargestUnitMva = 5000;
+
+    /// <summary>
+    /// |z| of the bank on the system base (DEVELOPERS.md, Per-unit rules): z · S_base / (mva · units) ·
+    /// (lvKv / kV_lv bus)² for nameplate data, |rPu + jxPu| / units for the per-unit form; null when a
+    /// value it needs is missing or not usable (other rules report those).
+    /// </summary>
+    private static double? SystemBaseImpedance(Transformer t, Bus? lv, double baseMva)
+    {
+        if (t.Units < 1 || !(baseMva > 0) || !double.IsFinite(baseMva)) return null;
+        if (t.RPu is double r && t.XPu is double x)
+            return Math.Sqrt(r * r + x * x) / t.Units;
+        if (t.ZPercent is double z && z > 0 && t.Mva is double mva && mva > 0 && t.LvKv is double lvKv && lvKv > 0
+            && lv is { Kv: > 0 } && t.RPu is null && t.XPu is null)
+            return z / 100 * baseMva / (mva * t.Units) * Math.Pow(lvKv / lv.Kv, 2);
+        return null;
     }
 
     private static void Require(ElementScope at, string field, double? value, string what)

@@ -1,23 +1,23 @@
-// A transformer's vector group must be IEC 60076-1 notation, with one letter group per winding.
+// Vector groups in IEC 60076-1 notation, checked with the rest of the data rather than only when a fault study needs them.
 namespace Study.Core.Model.Validation;
 
 internal static class VectorGroupRules
 {
     /// <summary>
-    /// An error when the notation cannot be read (the same reading the fault study makes), so a typing
-    /// slip is found when the transformer is entered, not when an earth fault is first asked for.
-    /// No vector group is not an error: only earth-fault studies need one, and they say so.
+    /// The parsed group, or null when none is given or it is not IEC 60076-1 notation (an error on
+    /// "vectorGroup", in the parser's words, with the number of windings the transformer has).
     /// </summary>
-    public static void Check(ElementScope at, string? vectorGroup, string id, bool threeWinding)
+    public static VectorGroup? Check(ElementScope at, string? text, string? id, bool threeWinding)
     {
-        if (vectorGroup is null) return;
+        if (text is null) return null;
         try
         {
-            VectorGroup.Parse(vectorGroup, id, threeWinding);
+            return VectorGroup.Parse(text, id ?? "", threeWinding);
         }
         catch (InputException e)
         {
             at.Error("vectorGroup", e.Message);
+            return null;
         }
     }
 }

@@ -11,7 +11,7 @@ internal static class WindingKvRules
 
     /// <summary>
     /// Nameplate data on a bus with no base kV is an error (its ratio cannot be formed); a winding far
-    /// from its bus's kV is a warning, saying so when it matches another winding's bus (swapped sides).
+    /// from its bus's kV is a warning (an error when about 1000 times off: a unit slip), saying so when it matches another winding's bus (swapped sides).
     /// Returns true when it reported swapped sides, so that callers need not say it again.
     /// </summary>
     public static bool Check(ElementScope at, string perUnitHint, params Winding[] windings)
@@ -40,9 +40,11 @@ internal static class WindingKvRules
             if (better is Winding match)
                 at.Warning(w.KvField, $"likely swapped sides: {w.KvField} {Numbers.Show(rated)} kV matches {match.Side} bus " +
                     $"{match.Bus!.Id} ({Numbers.Show(match.Bus.Kv)} kV), not {w.Side} bus {w.Bus!.Id} ({Numbers.Show(busKv)} kV)");
+            else if (Plausibility.KvHint(rated, busKv) is { Length: > 0 } unitSlip)
+                at.Error(w.KvField, $"rated kV {Numbers.Show(rated)} against bus base kV {Numbers.Show(busKv)} (bus {w.Bus!.Id}){unitSlip}");
             else
                 at.Warning(w.KvField, $"rated kV {Numbers.Show(rated)} differs from bus base kV {Numbers.Show(busKv)} " +
-                    $"(bus {w.Bus!.Id}) by {Numbers.Percent(off)} %: check {w.KvField} and the bus kv");
+                    $"(bus {w.Bus!.Id}) {Numbers.Difference(rated, busKv)}: check {w.KvField} and the bus kv");
         }
         return swapped;
     }
