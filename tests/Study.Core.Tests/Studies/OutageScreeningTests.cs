@@ -66,7 +66,8 @@ public class OutageScreeningTests
         BranchResult b1 = after.Branches.Single(b => b.Id == "B1");
         Assert.Equal(12 + b1.PFromMw, -a2.PToMw, 6);
         Assert.All(after.Branches.Where(b => b.Id == "A1"), b => Assert.Equal(0, b.PFromMw, 9));
-        Assert.Equal(row.WorstLoadingPercent!.Value, a2.LoadingPercent!.Value, 6);
+        // The screening's values-only solve and this full solve each stop at the convergence tolerance: they agree to 1e-4 %.
+        Assert.Equal(row.WorstLoadingPercent!.Value, a2.LoadingPercent!.Value, 4);
         Assert.Equal(row.WorstVPu!.Value, after.Buses.Single(b => b.Id == row.WorstVBus).VPu, 9);
         Assert.Throws<InputException>(() => study.SolveWithout("NOPE", new SolveRequest()));
     }

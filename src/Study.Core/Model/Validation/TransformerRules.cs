@@ -36,7 +36,6 @@ internal static class TransformerRules
         EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
         if (form == nameplate) CheckNoLoad(at, t.NoLoad, t.Mva);
         TapRules.Check(at, t.Tap, hasMvWinding: false);
-        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: false);
     }
 
     /// <summary>
