@@ -90,7 +90,7 @@ public sealed class FormDialogTests : IDisposable
                 Assert.EndsWith("5", Form(h)!.Texts[2].Text);
                 h.Keys(Key.Esc);
             }),
-            new Step("the question again", () => h.App.TopRunnableView is Dialog d && d is not ElementDialog, () => h.Keys(Key.CursorLeft, Key.Enter)),
+            new Step("the question again", () => h.App.TopRunnableView is Dialog d && d is not ElementDialog, () => h.Keys(Key.D)), // the hotkey the question names
             new Step("the main window again", () => !h.DialogUp, () => { }));
 
         Assert.Contains("the fields you changed will be lost", question);

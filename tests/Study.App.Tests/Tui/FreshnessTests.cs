@@ -19,6 +19,7 @@ public sealed class FreshnessTests : IDisposable
         var session = EditSession.Untitled(DemoNetwork.Read(), temp.File("user"));
         MainWindow main = h.Main(session);
         string solved = "", edited = "", undone = "", rescenario = "";
+        string? editedNote = null;
         h.Run(main,
             new Step("the main window", () => true, () => h.Keys(Key.F5)),
             new Step("the load flow", () => main.LastResult is not null && !main.Runner.IsRunning, () =>
@@ -30,6 +31,7 @@ public sealed class FreshnessTests : IDisposable
             new Step("the edit shown", () => true, () =>
             {
                 edited = h.Draw();
+                editedNote = main.Results.BusesTab.Notice.Note;
                 h.Keys(Key.Z.WithAlt);
             }),
             new Step("the undo shown", () => !session.Dirty, () =>
@@ -46,7 +48,8 @@ public sealed class FreshnessTests : IDisposable
         string[] rows = edited.Split('\n');
         Assert.StartsWith(" RESULTS OUT OF DATE: F5 re-solves", rows[23]);
         Assert.DoesNotContain("solved 3 it", rows[23]); // the old numbers do not stand as the answer
-        Assert.Contains("OUT OF DATE: the network was edited after this load flow", edited.Replace("\n", " "));
+        Assert.Contains("OUT OF DATE: the network was edited after this load", edited); // wrapped in the tab at 80 columns
+        Assert.StartsWith("OUT OF DATE: the network was edited after this load flow. F5", editedNote);
 
         Assert.DoesNotContain("OUT OF DATE", undone);
         Assert.Contains("undid: edit load", undone);
@@ -85,7 +88,9 @@ public sealed class FreshnessTests : IDisposable
         // The Buses tab is left without the old voltages (132.0 is the results' kV; the element table shows 132).
         Assert.Equal(0, CountRows(after, "│WRB132│132.0"));
         Assert.Contains("FAILED: Load flow failed", after.Replace("\n", " "));
-        Assert.DoesNotContain("solved", after.Split('\n')[39]);
+        string status = after.Split('\n')[39];
+        Assert.StartsWith(" LOAD FLOW FAILED: no results shown", status);
+        Assert.DoesNotContain("solved", status); // neither "solved 3 it" nor "not solved", which reads as never asked
         session.Close();
     }
 

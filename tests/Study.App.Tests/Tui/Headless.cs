@@ -18,7 +18,7 @@ public sealed record Step(string What, Func<bool> When, Action Do);
 /// An application of its own on the ANSI driver at a fixed size. <see cref="Run"/> runs a view (the main
 /// window, a dialog) and performs the steps one per loop iteration as their conditions come true, so
 /// modal dialogs and background studies are driven as a user would; it stops after the last step,
-/// and fails naming the step it waited for, with the screen, when a step does not come.
+/// and throws naming the step it waited for, with the screen, when a step does not come.
 /// </summary>
 public sealed class Headless : IDisposable
 {
@@ -72,7 +72,6 @@ public sealed class Headless : IDisposable
     {
         int next = 0;
         var deadline = DateTime.UtcNow + Patience;
-        string? timedOut = null;
         App.Iteration += OnIteration;
         try
         {
@@ -82,7 +81,6 @@ public sealed class Headless : IDisposable
         {
             App.Iteration -= OnIteration;
         }
-        Assert.True(timedOut is null, timedOut);
 
         void OnIteration(object? sender, EventArgs e)
         {
@@ -94,9 +92,8 @@ public sealed class Headless : IDisposable
             }
             if (DateTime.UtcNow > deadline)
             {
-                timedOut ??= $"waited for: {steps[next].What}; the screen was:\n{Draw()}";
-                next = steps.Length;
-                return;
+                // Thrown, not stopped: a form that asks before it closes would otherwise keep the run alive.
+                throw new TimeoutException($"waited for: {steps[next].What}; the screen was:\n{Draw()}");
             }
             if (!steps[next].When()) return;
             App.LayoutAndDraw(true);

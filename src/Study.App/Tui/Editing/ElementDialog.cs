@@ -172,7 +172,7 @@ public sealed class ElementDialog : Dialog
     private void AskDiscard()
     {
         // Keep editing is the default: Enter after a stray Esc loses nothing.
-        int? answer = Prompts.Ask(app, "Discard changes?", $"{form.Title}: the fields you changed will be lost.", "Discard", "Keep editing");
+        int? answer = Prompts.Ask(app, "Discard changes?", $"{form.Title}: the fields you changed will be lost.\n\nD discards them · Enter or Esc keeps editing.", "Discard", "Keep editing");
         if (answer != 0) return;
         discardConfirmed = true;
         Result = null;

@@ -250,7 +250,8 @@ public sealed class MainWindow : Window
     }
 
     public void RefreshStatus() =>
-        Status.Summary = StatusLine.Summary(LastResult, Session.ActiveScenario, Runner.Progress, AnyOutOfDate);
+        Status.Summary = StatusLine.Summary(LastResult, Session.ActiveScenario, Runner.Progress, AnyOutOfDate,
+            failed: failures.ContainsKey(ResultKind.LoadFlow));
 
     /// <summary>Each result tab's notice: failed, not converged, or out of date and which key runs it again.</summary>
     private void RefreshNotices()

@@ -11,12 +11,14 @@ public static class StatusLine
     public const string Hints = "F1 Keys  F2 Save  F4 Edit  F5 Solve  Ins Add  Del Delete  Alt+F Menu  Alt+Q Quit";
 
     /// <param name="stale">True when a result on screen is of another network or scenario than the one now edited.</param>
-    public static string Summary(LoadFlowResult? result, string? scenario, string? running, bool stale = false)
+    /// <param name="failed">True when the last load flow failed: its old result was cleared, and "not solved" would read as if none had been asked for.</param>
+    public static string Summary(LoadFlowResult? result, string? scenario, string? running, bool stale = false, bool failed = false)
     {
         string scen = "scenario " + Labels.Scenario(scenario);
         if (running is not null) return $"{running} │ {scen}";
         // The old solve's numbers are left out: out of date, they would be read as the answer.
         if (stale) return $"RESULTS OUT OF DATE: F5 re-solves │ {scen}";
+        if (failed) return $"LOAD FLOW FAILED: no results shown │ {scen}";
         if (result is null) return $"not solved │ {scen}";
         // After a scenario switch the shown results are still the old scenario's until F5.
         if (result.Scenario != scenario) scen += $" (shown: {Labels.Scenario(result.Scenario)})";
