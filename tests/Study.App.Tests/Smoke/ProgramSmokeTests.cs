@@ -79,6 +79,12 @@ public sealed class ProgramSmokeTests(ITestOutputHelper output)
             Assert.Contains("! Base kV", refused);
             Assert.Contains("Add bus", refused);
 
+            // Esc asks first; Enter keeps editing with the text still there.
+            tmux.Keys("Escape");
+            Expect(tmux, "the fields you changed will be lost", Step, "the discard question");
+            tmux.Keys("Enter");
+            Expect(tmux, s => s.Contains("Not accepted", StringComparison.Ordinal) && !s.Contains("Discard changes?", StringComparison.Ordinal), "the form kept");
+
             // Fixed, the bus goes in, and the load flow on screen says it is out of date.
             tmux.Keys("BSpace", "BSpace", "BSpace", "BSpace", "BSpace", "BSpace", "1", "1", "Enter");
             string edited = Expect(tmux, "RESULTS OUT OF DATE: F5 re-solves", Step, "the status line after the edit");

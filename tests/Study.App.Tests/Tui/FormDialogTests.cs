@@ -5,6 +5,7 @@ using Study.Core.Cases;
 using Study.Core.Model;
 using Study.Core.Model.Validation;
 using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 
 namespace Study.App.Tests.Tui;
@@ -63,13 +64,14 @@ public sealed class FormDialogTests : IDisposable
     }
 
     [Fact]
-    public void Esc_after_a_change_asks_first_keep_editing_loses_nothing_and_discard_leaves_the_load_as_it_was()
+    public void Esc_after_a_change_asks_first_keep_editing_loses_nothing_and_an_unchanged_form_closes_leaving_the_load_as_it_was()
     {
         using var h = new Headless();
         EditSession session = Demo();
         MainWindow main = h.Main(session);
         Load before = session.Network.Loads[0];
         string? question = null;
+        string unchanged = new ElementForm(session.Network, ElementKind.Load, before.Id).Texts[2];
         main.Select(ElementKind.Load, before.Id);
         h.Run(main,
             new Step("the main window", () => true, () => h.Keys(Key.F4)),
@@ -90,7 +92,13 @@ public sealed class FormDialogTests : IDisposable
                 Assert.EndsWith("5", Form(h)!.Texts[2].Text);
                 h.Keys(Key.Esc);
             }),
-            new Step("the question again", () => h.App.TopRunnableView is Dialog d && d is not ElementDialog, () => h.Keys(Key.D)), // the hotkey the question names
+            new Step("the question again", () => h.App.TopRunnableView is Dialog d && d is not ElementDialog, () => h.Keys(Key.Esc)), // Esc keeps editing too
+            new Step("the form a third time", () => Form(h) is not null, () =>
+            {
+                // Back as it was, the form closes on Esc without asking.
+                Form(h)!.Texts[2].Text = unchanged;
+                h.Keys(Key.Esc);
+            }),
             new Step("the main window again", () => !h.DialogUp, () => { }));
 
         Assert.Contains("the fields you changed will be lost", question);
