@@ -195,7 +195,9 @@ public sealed class MainWindow : Window
         }
         stamps.Remove(what);
         failures[what] = message;
-        Status.Message = message;
+        // One row: the first line of the message; the tab's notice gives the rest.
+        string first = message.Split('\n')[0].TrimEnd(':', ' ');
+        Status.Message = first.Length < message.TrimEnd().Length ? first + " (in full in the tab)" : first;
         RefreshNotices();
         RefreshStatus();
     }
