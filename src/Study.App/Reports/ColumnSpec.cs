@@ -79,8 +79,8 @@ public sealed class ColumnSpec<TRow>
         return chosen;
     }
 
-    /// <summary>The readable cells of each row; a group-naming cell that repeats the row above is left empty.</summary>
-    public List<string[]> ReadableRows(IEnumerable<TRow> rows)
+    /// <summary>The readable cells of each row; a group-naming cell that repeats the row above is left empty unless <paramref name="blankRepeats"/> is false.</summary>
+    public List<string[]> ReadableRows(IEnumerable<TRow> rows, bool blankRepeats = true)
     {
         Column<TRow>[] shown = Readable.ToArray();
         var cells = new List<string[]>();
@@ -90,7 +90,7 @@ public sealed class ColumnSpec<TRow>
             string[] full = shown.Select(c => c.Text(row)).ToArray();
             string[] line = (string[])full.Clone();
             for (int i = 0; i < shown.Length; i++)
-                if (shown[i].NamesGroup && previous is not null && previous[i] == full[i]) line[i] = "";
+                if (blankRepeats && shown[i].NamesGroup && previous is not null && previous[i] == full[i]) line[i] = "";
             cells.Add(line);
             previous = full;
         }

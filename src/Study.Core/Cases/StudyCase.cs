@@ -230,6 +230,21 @@ public sealed class StudyCase
         return MotorStart.Run(Model(Scenario(request.Scenario)), request, cancel);
     }
 
+    /// <summary>
+    /// The load flow of one scenario with one line or transformer out: what an outage of a screening
+    /// leaves, bus by bus and branch by branch. Solved as the screening solves it (warm started from the
+    /// intact case when that converges), so it agrees with the screening's row.
+    /// </summary>
+    /// <exception cref="InputException">The request is out of bounds, names an unknown scenario, or the element is not an in-service line or transformer.</exception>
+    public LoadFlowResult SolveWithout(string elementId, SolveRequest request, CancellationToken cancel = default)
+    {
+        request.Validate();
+        OutageElements.Pick(Network, [elementId]);
+        PerUnitModel intact = Model(Scenario(request.Scenario));
+        LoadFlowResult before = LoadFlowSolver.Solve(intact, request.Options, cancel);
+        return LoadFlowSolver.Solve(intact.WithoutBranch(elementId), request.Options with { WarmStart = before.Converged ? before : null }, cancel);
+    }
+
     /// <summary>Two cases (two networks, or two scenarios of one) solved alike and compared bus by bus and branch by branch.</summary>
     /// <exception cref="InputException">A scenario name matches no scenario of its network.</exception>
     public static CaseComparisonResult Compare(StudyCase before, string? beforeScenario, StudyCase after, string? afterScenario,

@@ -41,6 +41,14 @@ public sealed record FaultRequest
     /// <summary>Options of the load flow solved here when <see cref="PreFault"/> is null.</summary>
     public LoadFlowOptions? LoadFlowOptions { get; init; }
 
+    /// <summary>
+    /// False (the default, the command line): an earth fault asked for on a network where some element
+    /// lacks zero-sequence data is an input error naming the first such element. True (the terminal UI):
+    /// the faults that need no zero sequence are still given, the earth faults are left out, and
+    /// <see cref="FaultResult.MissingZeroSequence"/> lists every element that lacks the data.
+    /// </summary>
+    public bool LeaveOutEarthFaultsWithoutZeroSequence { get; init; }
+
     /// <summary>Post-fault phase voltages at the faulted bus and its neighbours.</summary>
     public bool IncludeVoltages { get; init; } = true;
 

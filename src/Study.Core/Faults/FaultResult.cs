@@ -33,6 +33,19 @@ public sealed record FaultResult
     public IReadOnlyList<BreakerDuty> Breakers { get; init; } = [];
     /// <summary>Assumptions and defaults the engineer should see (assumed power factors, sources left out, ...).</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
+    /// <summary>
+    /// With <see cref="FaultRequest.LeaveOutEarthFaultsWithoutZeroSequence"/>: what each element lacks for the
+    /// zero sequence ("line F2 has no zero-sequence data (z0) ..."), by element id; the earth faults are then
+    /// left out (<see cref="LeftOut"/>). Empty when nothing is missing.
+    /// </summary>
+    public IReadOnlyList<MissingData> MissingZeroSequence { get; init; } = [];
+
+    /// <summary>Fault kinds asked for but not calculated, because the zero-sequence data is incomplete.</summary>
+    public IReadOnlyList<FaultKind> LeftOut { get; init; } = [];
+
     /// <summary>True when no bus states its kV: results in per unit only.</summary>
     public bool PerUnitOnly { get; init; }
 }
+
+/// <summary>Data an element lacks for a calculation: the element and the sentence saying what to give.</summary>
+public sealed record MissingData(string ElementId, string Message);

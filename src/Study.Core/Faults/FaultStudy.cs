@@ -51,10 +51,15 @@ public static class FaultStudy
         // terminals sees K_G,S and K_T,S for that unit instead (IEC 60909-0 §6.7, from memory).
         IReadOnlyList<PowerStationUnit> units = request.Method == FaultMethod.Iec60909 ? PowerStationUnits.Find(model, notes) : [];
         double? lineC = request.Level == FaultLevel.Min ? request.LineTemperatureC : null;
-        SequenceNetworks Networks(PowerStationUnit? atTerminals) => SequenceNetworks.Build(model, request.Method, request.Level, earth, voltage, notes,
+        bool zeroRequired = earth && !request.LeaveOutEarthFaultsWithoutZeroSequence;
+        SequenceNetworks Networks(PowerStationUnit? atTerminals) => SequenceNetworks.Build(model, request.Method, request.Level, zeroRequired, voltage, notes,
             units.ToDictionary(u => u.Source, u => u == atTerminals ? u.GeneratorAtTerminals : u.Unit),
             units.ToDictionary(u => u.Branch, u => u == atTerminals ? u.TransformerAtTerminals : u.Unit), lineC);
-        var scan = new FaultScan(model, Networks(null), request, preFault);
+        SequenceNetworks networks = Networks(null);
+        // Only reached without a zero sequence when the request allows it: the other kinds still run.
+        IReadOnlyList<FaultKind> leftOut = earth && networks.Zero is null ? request.Kinds.Where(k => k.InvolvesEarth()).ToList() : [];
+        if (leftOut.Count > 0) request = request with { Kinds = request.Kinds.Where(k => !k.InvolvesEarth()).ToList() };
+        var scan = new FaultScan(model, networks, request, preFault);
         var terminalScans = new Dictionary<int, FaultScan>();
         var faults = new List<ShortCircuitLevel>(buses.Length * request.Kinds.Count);
         foreach (int bus in buses)
@@ -85,6 +90,8 @@ public static class FaultStudy
             FrequencyHz = model.FrequencyHz,
             Breakers = BreakerDutyCheck.Evaluate(model.Breakers, faults, request.DurationS, model.BaseMva),
             Notes = notes.Distinct().ToList(), PerUnitOnly = model.PerUnitOnly,
+            LeftOut = leftOut,
+            MissingZeroSequence = leftOut.Count == 0 ? [] : networks.ZeroProblems.Select(p => new MissingData(p.ElementId ?? "", p.Message)).ToList(),
         };
     }
 

@@ -16,11 +16,16 @@ internal sealed class SequenceBranches
     public required PuBranch[] Negative { get; init; }
     /// <summary>Positive sequence with every reactance at f_c/f (IEC 60909-0 §8.1.3 method C).</summary>
     public required PuBranch[] EquivalentFrequency { get; init; }
-    /// <summary>Null when the zero sequence was not built (no earth fault asked for and data incomplete).</summary>
+    /// <summary>Null when the zero sequence was not built: some element lacks the data (see <see cref="ZeroProblems"/>).</summary>
     public ZeroSequencePath[]? Zero { get; init; }
+    /// <summary>Every element whose zero-sequence data is missing or unreadable, one problem each, in branch order.</summary>
+    public required IReadOnlyList<InputException> ZeroProblems { get; init; }
     public required int[] ClockLag { get; init; }
 
-    /// <param name="zeroRequired">True for an earth-fault study: missing zero-sequence data is an input error.</param>
+    /// <param name="zeroRequired">
+    /// True: missing zero-sequence data is an input error (the first problem is thrown); false: the
+    /// zero sequence is left out and <see cref="ZeroProblems"/> lists every element that lacks it.
+    /// </param>
     /// <param name="transformerFactors">Power-station units: the factor that replaces K_T, by branch index.</param>
     /// <param name="lineResistanceC">Minimum levels: lines at this conductor temperature (their data at 20 °C); null to take the data as given.</param>
     public static SequenceBranches Build(PerUnitModel model, FaultMethod method, bool zeroRequired, double fcOverF, List<string> notes,
@@ -34,7 +39,9 @@ internal sealed class SequenceBranches
         var eqf = new PuBranch[m];
         var lag = new int[m];
         var zero = new ZeroSequencePath[m];
-        InputException? zeroProblem = null;
+        var zeroProblems = new List<InputException>();
+        // Earthing notes concern the zero sequence: they are kept only when it is built.
+        var zeroNotes = new List<string>();
 
         for (int k = 0; k < m; k++)
         {
@@ -53,7 +60,7 @@ internal sealed class SequenceBranches
                     if (corrected is double value) kT = value;
                     else notes.Add($"{b.Id}: per-unit data without a rating: K_T not applied");
                 }
-                group = GroupOf(b, threeWinding: false, ref zeroProblem);
+                group = GroupOf(b, threeWinding: false, zeroProblems);
                 if (group is not null) lag[k] = group.LvClock;
             }
             else if (b.Kind == BranchKind.ThreeWindingTransformer && b.ThreeWindingRating is { } rating)
@@ -64,7 +71,7 @@ internal sealed class SequenceBranches
                     var s = kThree[b.Id];
                     kT = b.Winding == "hv" ? s.Hv : b.Winding == "mv" ? s.Mv : s.Lv;
                 }
-                group = GroupOf(b, threeWinding: true, ref zeroProblem);
+                group = GroupOf(b, threeWinding: true, zeroProblems);
                 // The star point is at the hv reference, so it leads the winding's terminal by that winding's clock.
                 if (group is not null) lag[k] = -(b.Winding == "mv" ? group.MvClock : b.Winding == "lv" ? group.LvClock : 0);
             }
@@ -77,17 +84,17 @@ internal sealed class SequenceBranches
             pos[k] = b with { Z = b.Z * kT, Ratio = ratio, ShiftRad = b.ShiftRad - b.GroupShiftRad, GroupShiftRad = 0 };
             neg[k] = pos[k] with { ShiftRad = -pos[k].ShiftRad };
             eqf[k] = AtFrequency(pos[k], fcOverF);
-            if (zeroProblem is null)
-                zero[k] = ZeroPath(model, pos[k], b, kT, group, notes, ref zeroProblem);
+            zero[k] = ZeroPath(model, pos[k], b, kT, group, zeroNotes, zeroProblems);
         }
+        if (zeroProblems.Count == 0) notes.AddRange(zeroNotes);
 
         if (lineResistanceC is double c && model.Branches.Any(b => b.ResistanceCoefficient is not null))
             notes.Add(FormattableString.Invariant($"minimum levels: line resistance at {c:0.#} °C, the end-of-fault temperature (the data taken at 20 °C)"));
-        if (zeroProblem is not null && zeroRequired) throw zeroProblem;
+        if (zeroProblems.Count > 0 && zeroRequired) throw zeroProblems[0];
         return new SequenceBranches
         {
             Positive = pos, Negative = neg, EquivalentFrequency = eqf, ClockLag = lag,
-            Zero = zeroProblem is null ? zero : null,
+            Zero = zeroProblems.Count == 0 ? zero : null, ZeroProblems = zeroProblems,
         };
     }
 
@@ -99,27 +106,30 @@ internal sealed class SequenceBranches
         MagnetisingY = Faults.EquivalentFrequency.Parallel(positive.MagnetisingY, fcOverF),
     };
 
-    private static VectorGroup? GroupOf(PuBranch b, bool threeWinding, ref InputException? problem)
+    /// <summary>The vector group, or null with a problem added (once per element: a three-winding bank has three star branches).</summary>
+    private static VectorGroup? GroupOf(PuBranch b, bool threeWinding, List<InputException> problems)
     {
         PuWindings? w = b.Windings;
+        InputException? problem = null;
         if (w?.GroupText is null)
-            problem ??= new InputException(
+            problem = new InputException(
                 $"transformer {b.Id} has no vector group: an earth-fault study needs it to decide the zero-sequence circuit (e.g. \"vectorGroup\": \"{(threeWinding ? "YNyn0d1" : "Dyn11")}\")",
                 elementId: b.Id);
         else if (w.Group is null)
-            problem ??= new InputException(w.GroupProblem ?? $"vector group '{w.GroupText}' cannot be read", elementId: b.Id);
+            problem = new InputException(w.GroupProblem ?? $"vector group '{w.GroupText}' cannot be read", elementId: b.Id);
+        if (problem is not null && !problems.Any(p => p.ElementId == b.Id)) problems.Add(problem);
         return w?.Group;
     }
 
     private static ZeroSequencePath ZeroPath(PerUnitModel model, PuBranch corrected, PuBranch b, double kT, VectorGroup? group,
-        List<string> notes, ref InputException? problem)
+        List<string> notes, List<InputException> problems)
     {
         switch (b.Kind)
         {
             case BranchKind.Line:
                 if (b.Z0 is Complex z0Line) return ZeroSequencePath.Line(corrected, z0Line);
-                problem = new InputException(
-                    $"line {b.Id} has no zero-sequence data (z0): an earth-fault study needs it; give z0 with per, r and x", elementId: b.Id);
+                problems.Add(new InputException(
+                    $"line {b.Id} has no zero-sequence data (z0): an earth-fault study needs it; give z0 with per, r and x", elementId: b.Id));
                 return ZeroSequencePath.Open;
             case BranchKind.Transformer when group is not null:
             {

@@ -36,12 +36,15 @@ public sealed class SequenceNetworks
         EquivalentFrequency = equivalentFrequency;
         atFrequency[Faults.EquivalentFrequency.Ratio] = equivalentFrequency;
         ClockLag = branches.ClockLag;
+        ZeroProblems = branches.ZeroProblems;
     }
 
     public SequenceNetwork Positive { get; }
     public SequenceNetwork Negative { get; }
-    /// <summary>Null when no earth fault was asked for and the zero-sequence data is incomplete.</summary>
+    /// <summary>Null when the zero-sequence data is incomplete (<see cref="ZeroProblems"/> says where).</summary>
     public SequenceNetwork? Zero { get; }
+    /// <summary>Each element whose zero-sequence data is missing or unreadable; empty when <see cref="Zero"/> was built.</summary>
+    public IReadOnlyList<Model.InputException> ZeroProblems { get; }
     /// <summary>Positive sequence at f_c for κ (IEC 60909-0 §8.1.3 method C).</summary>
     public SequenceNetwork EquivalentFrequency { get; }
     /// <summary>Per model branch: clock lag of its To end behind its From end, in 30° steps.</summary>

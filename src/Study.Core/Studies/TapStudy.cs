@@ -165,7 +165,7 @@ public static class TapStudy
         TapRecommendation? closest = recommended.Count > 0 ? null
             : worst.Where(w => double.IsFinite(w.MarginPu)).OrderByDescending(w => w.MarginPu).FirstOrDefault();
         string bandText = request.Band is { } b ? $"{b.Low:0.###}–{b.High:0.###} pu" : "their own vMin–vMax";
-        string cases = scenarios.Count == 1 ? (scenarios[0]?.Name is string s ? $"scenario {s}" : "the loads as entered")
+        string cases = scenarios.Count == 1 ? (scenarios[0]?.Name is string s ? $"scenario {s}" : "the case as entered")
             : $"all {scenarios.Count} scenarios";
         string finding = recommended.Count > 0
             ? (recommended.Count == 1 ? $"position {recommended[0].Position} keeps" : $"positions {string.Join(", ", recommended.Select(r => r.Position))} keep")

@@ -51,6 +51,62 @@ public sealed class ProgramSmokeTests(ITestOutputHelper output)
         }
     }
 
+    [Fact]
+    public void A_bad_entry_keeps_the_form_open_and_an_edit_marks_the_results_out_of_date_until_undone_at_80x24()
+    {
+        if (!TmuxSession.Available())
+        {
+            output.WriteLine("skipped: tmux is not on PATH");
+            return;
+        }
+        string dll = Path.Combine(AppContext.BaseDirectory, "study.dll");
+        using TmuxSession tmux = TmuxSession.Start($"dotnet '{dll}'", AppContext.BaseDirectory, 80, 24);
+        try
+        {
+            Expect(tmux, "Buses (10)", Start, "the demo network's element list");
+            tmux.Keys("F5");
+            Expect(tmux, "solved 3 it", Step, "the load flow");
+
+            // Add a bus with letters in Base kV: Enter keeps the form and what was typed, and says why.
+            tmux.Keys("Tab");
+            tmux.Keys("IC");
+            Expect(tmux, "Add bus", Step, "the Add bus form");
+            tmux.Keys("Tab");
+            tmux.Keys("e", "l", "e", "v", "e", "n");
+            Expect(tmux, "eleven", Step, "the typed text");
+            tmux.Keys("Enter");
+            string refused = Expect(tmux, "Not accepted: Base kV: 'eleven' is not a number", Step, "the refusal");
+            Assert.Contains("! Base kV", refused);
+            Assert.Contains("Add bus", refused);
+
+            // Esc asks first; Enter keeps editing with the text still there.
+            tmux.Keys("Escape");
+            Expect(tmux, "the fields you changed will be lost", Step, "the discard question");
+            tmux.Keys("Enter");
+            Expect(tmux, s => s.Contains("Not accepted", StringComparison.Ordinal) && !s.Contains("Discard changes?", StringComparison.Ordinal), "the form kept");
+
+            // Fixed, the bus goes in, and the load flow on screen says it is out of date.
+            tmux.Keys("BSpace", "BSpace", "BSpace", "BSpace", "BSpace", "BSpace", "1", "1", "Enter");
+            string edited = Expect(tmux, "RESULTS OUT OF DATE: F5 re-solves", Step, "the status line after the edit");
+            Assert.Contains("Buses (11)", edited);
+            Assert.Contains("OUT OF DATE: the network was edited after this load", edited);
+            Assert.DoesNotContain("solved 3 it", edited);
+
+            // Undo gives the network the load flow was of: current again.
+            tmux.Keys("M-z");
+            string undone = Expect(tmux, "undid: add bus B1", Step, "the undo");
+            Assert.DoesNotContain("OUT OF DATE", undone);
+
+            tmux.Keys("M-q");
+            Expect(tmux, "STUDY-EXITED-0", Step, "the program's exit");
+        }
+        catch
+        {
+            output.WriteLine(tmux.Capture());
+            throw;
+        }
+    }
+
     private static string Expect(TmuxSession tmux, string text, TimeSpan timeout, string what) =>
         Expect(tmux, s => s.Contains(text, StringComparison.Ordinal), what, timeout);
 

@@ -53,7 +53,7 @@ public sealed class FormAndResultTests
         form.Texts[form.Fields.ToList().FindIndex(f => f.Name == "Impedance")] = "-10";
         FormState state = form.Evaluate();
         Assert.Contains(state.Problems, p => p.Contains("Present position: Present position 12 is outside the range [-8, 8]", StringComparison.Ordinal));
-        Assert.Contains(state.Problems, p => p.StartsWith("error: Impedance: Impedance is -10", StringComparison.Ordinal));
+        Assert.Contains(state.Problems, p => p.StartsWith("error: Impedance %: Impedance % is -10", StringComparison.Ordinal));
         Assert.DoesNotContain(state.Problems, p => p.Contains("tap.position", StringComparison.Ordinal) || p.Contains("zPercent", StringComparison.Ordinal));
     }
 

@@ -48,7 +48,7 @@ public sealed class OutageTabTests
             at += s.Outages.Count;
         }
         // Each row names its tier in words, so the ranking reads without colour.
-        Assert.All(table.RowCells, row => Assert.Matches("(NO CONV|LOAD LOST|stressed|secure)$", row[4]));
+        Assert.All(table.RowCells, row => Assert.Matches("(NO SOLUTION|LOAD LOST|LIMITS BROKEN|secure)$", row[4]));
         OutageCase overloaded = OutageTables.Cases(r).First(c => c.WorstLoadingPercent > 100);
         Assert.Contains(table.RowCells, row => row[2] == overloaded.Element && row[8].EndsWith('▲') && row[9] == overloaded.WorstLoadingElement);
         Assert.Contains(table.RowCells, row => row[6].Contains('▼', StringComparison.Ordinal));
@@ -65,8 +65,8 @@ public sealed class OutageTabTests
                 [new OutageCase { Element = "L9", Kind = Study.Core.Units.BranchKind.Line, Converged = false, Severity = OutageSeverity.NoConvergence }] }],
         };
         string[] row = Assert.Single(OutageTables.Outages(r).RowCells);
-        Assert.Equal(["as entered", "1", "L9", "line", "1000.0 NO CONV", "—", "—", "—", "—", "—", "—", "—"], row);
-        Assert.StartsWith("as entered: 1 NO CONV · 0 secure", OutageTables.Heading(r));
+        Assert.Equal(["as entered", "1", "L9", "line", "1000.0 NO SOLUTION", "—", "—", "—", "—", "—", "—", "—"], row);
+        Assert.StartsWith("as entered: 1 NO SOLUTION (1000) · 0 secure (0)", OutageTables.Heading(r));
     }
 
     [Fact]

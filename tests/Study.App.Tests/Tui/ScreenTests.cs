@@ -67,8 +67,11 @@ public sealed class ScreenTests
             view!.Result = result;
             view.Value = view.BusesTab;
         });
-        string row = screen.Split('\n').Single(r => r.Contains("B11F"));
+        string row = screen.Split('\n').Single(r => r.Contains("│B11F"));
         Assert.Contains("0.9310▼", row);
-        Assert.DoesNotContain("▼", screen.Split('\n').Single(r => r.Contains("B33")));
+        Assert.DoesNotContain("▼", screen.Split('\n').Single(r => r.Contains("│B33")));
+        // The heading names the lowest and the highest bus voltage at a glance.
+        Assert.Contains("lowest V 0.9310 pu at B11F ▼", screen);
+        Assert.Contains("highest V 1.0000 pu at B33", screen);
     }
 }

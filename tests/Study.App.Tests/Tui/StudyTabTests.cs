@@ -83,15 +83,18 @@ public sealed class StudyTabTests
     }
 
     [Fact]
-    public void Fault_form_asks_for_the_selected_bus_by_default_and_needs_a_kind()
+    public void Fault_form_asks_for_every_bus_by_default_the_selected_bus_only_when_chosen_and_needs_a_kind()
     {
         var form = new FaultForm("CQ11");
         FaultRequest request = form.Build().Request!;
-        Assert.Equal(["CQ11"], request.Buses);
+        Assert.Null(request.Buses); // every bus, whatever row the cursor happens to be on
         Assert.Equal(FaultRequest.Default.Kinds, request.Kinds);
+        form.AllBuses = false;
+        Assert.Equal(["CQ11"], form.Build().Request!.Buses);
         form.Kinds.Clear();
         Assert.NotNull(form.Build().Error);
         Assert.True(new FaultForm(null).AllBuses);
+        Assert.NotNull(new FaultForm(null) { AllBuses = false }.Build().Error);
     }
 
     [Fact]

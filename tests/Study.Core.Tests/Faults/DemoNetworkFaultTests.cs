@@ -113,6 +113,35 @@ public class DemoNetworkFaultTests
         Assert.Contains("vector group", e.Message);
     }
 
+    [Fact]
+    public void When_asked_the_study_gives_three_phase_levels_without_zero_sequence_data_and_lists_every_element_that_lacks_it()
+    {
+        var demo = TestNetworks.Demo;
+        var network = demo with
+        {
+            Lines = demo.Lines.Select(l => l.Id == "RING-2" ? l with { Z0 = null } : l).ToList(),
+            Transformers = demo.Transformers.Select(t => t.Id == "CQ-T1" ? t with { VectorGroup = null } : t).ToList(),
+        };
+        var request = new FaultRequest { Kinds = [FaultKind.ThreePhase, FaultKind.LineToEarth], LeaveOutEarthFaultsWithoutZeroSequence = true };
+        FaultResult result = FaultStudy.Run(PerUnitModel.Build(network), request);
+
+        Assert.Equal([FaultKind.LineToEarth], result.LeftOut);
+        Assert.Equal(["RING-2", "CQ-T1"], result.MissingZeroSequence.Select(m => m.ElementId).Order().Reverse().ToList());
+        Assert.Contains(result.MissingZeroSequence, m => m.Message.Contains("no zero-sequence data (z0)", StringComparison.Ordinal));
+        Assert.Contains(result.MissingZeroSequence, m => m.Message.Contains("no vector group", StringComparison.Ordinal));
+        Assert.All(result.Faults, f => Assert.Equal(FaultKind.ThreePhase, f.Kind));
+        // The three-phase fault sees the positive sequence only (Fortescue): its levels are those of the
+        // complete network, bus by bus.
+        FaultResult complete = FaultStudy.Run(PerUnitModel.Build(demo), new FaultRequest { Kinds = [FaultKind.ThreePhase] });
+        Assert.Equal(complete.Faults.Count, result.Faults.Count);
+        for (int i = 0; i < complete.Faults.Count; i++)
+            Assert.Equal(complete.Faults[i].IkKa!.Value, result.Faults[i].IkKa!.Value, 9);
+        Assert.Equal(demo.Breakers.Count, result.Breakers.Count);
+
+        // Without the request's consent it stays an input error naming the first element, as before.
+        Assert.Throws<InputException>(() => FaultStudy.Run(PerUnitModel.Build(network), request with { LeaveOutEarthFaultsWithoutZeroSequence = false }));
+    }
+
     // Kirchhoff at the faulted bus: the branch contributions and the local sources add up to the fault current.
     [Fact]
     public void Branch_contributions_at_a_bus_without_a_source_add_up_to_the_fault_current()

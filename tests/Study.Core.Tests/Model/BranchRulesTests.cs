@@ -18,6 +18,29 @@ public class BranchRulesTests
         Assert.Equal("error: transformer T1 (hvKv): hvKv 132000 looks like volts: did you mean 132 kV?", p.Describe());
     }
 
+    [Theory]
+    [InlineData("Dyn 11", "clock number")]
+    [InlineData("dyn11", "capitals")]
+    [InlineData("DYN11", "small letters")]
+    [InlineData("Dyn13", "outside 0 to 11")]
+    [InlineData("YNyn0d1", "two windings")]
+    public void A_vector_group_that_is_not_IEC_60076_1_notation_is_an_error_naming_why(string group, string why)
+    {
+        Network net = Clean();
+        net = net with { Transformers = net.Transformers.Change(0, t => t with { VectorGroup = group }) };
+        Problem p = Single(NetworkValidator.Validate(net), ElementKind.Transformer, "T1", "vectorGroup");
+        Assert.Equal(Severity.Error, p.Severity);
+        Assert.Contains($"vector group '{group}' is not IEC 60076-1 notation", p.Message);
+        Assert.Contains(why, p.Message);
+        // The notation itself, from IEC 60076-1 (from memory): Dyn11, YNd1 and Yzn11 read.
+        foreach (string good in new[] { "Dyn11", "YNd1", "Yzn11" })
+        {
+            Network ok = Clean();
+            ok = ok with { Transformers = ok.Transformers.Change(0, t => t with { VectorGroup = good }) };
+            Assert.DoesNotContain(NetworkValidator.Validate(ok).Problems, x => x.Field == "vectorGroup");
+        }
+    }
+
     [Fact]
     public void Rated_kv_of_the_other_side_is_reported_as_likely_swapped_sides()
     {

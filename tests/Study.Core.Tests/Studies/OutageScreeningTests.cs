@@ -55,6 +55,24 @@ public class OutageScreeningTests
     }
 
     [Fact]
+    public void The_load_flow_with_one_feeder_out_carries_the_whole_load_on_the_other_and_agrees_with_the_screening_row()
+    {
+        StudyCase study = StudyCase.Of(TwinFeederWithSpur(10));
+        LoadFlowResult after = study.SolveWithout("A1", new SolveRequest());
+        Assert.True(after.Converged);
+        OutageCase row = study.Outages(new OutageScreeningRequest { ElementIds = ["A1"] }).Scenarios.Single().Outages.Single();
+        // Kirchhoff at bus A: with A1 out, A2 alone brings A's 12 MW and what the spur takes on to B.
+        BranchResult a2 = after.Branches.Single(b => b.Id == "A2");
+        BranchResult b1 = after.Branches.Single(b => b.Id == "B1");
+        Assert.Equal(12 + b1.PFromMw, -a2.PToMw, 6);
+        Assert.All(after.Branches.Where(b => b.Id == "A1"), b => Assert.Equal(0, b.PFromMw, 9));
+        // The screening's values-only solve and this full solve each stop at the convergence tolerance: they agree to 1e-4 %.
+        Assert.Equal(row.WorstLoadingPercent!.Value, a2.LoadingPercent!.Value, 4);
+        Assert.Equal(row.WorstVPu!.Value, after.Buses.Single(b => b.Id == row.WorstVBus).VPu, 9);
+        Assert.Throws<InputException>(() => study.SolveWithout("NOPE", new SolveRequest()));
+    }
+
+    [Fact]
     public void Demo_cold_quay_bank_out_islands_the_11kV_buses_with_11_MW_lost_at_winter_peak()
     {
         // The 11 MW of loads and running motors at Cold Quay 11 kV and its 415 V board are partly constant

@@ -15,7 +15,7 @@ public sealed class CompareCommand : CliCommand
     protected override void Declare(Declaration d) => d
         .Positional("BEFORE", "the network before the change (or the one FILE whose scenarios --scenarios compares)")
         .Positional("AFTER", "the network after the change, solved alike and matched by id", required: false)
-        .Value("scenario", "NAME", "solve both networks in this scenario (default: loads as entered)")
+        .Value("scenario", "NAME", "solve both networks in this scenario (default: as entered)")
         .Value("scenarios", "A,B", "with one FILE: compare its scenario A (before) with its scenario B (after)")
         .Flag("json", "machine-readable result")
         .Value("csv", "DIR", "write buses.csv, branches.csv, violations.csv and totals.csv into DIR")

@@ -10,7 +10,7 @@ namespace Study.App.Cli.Compare;
 /// <summary>One side of a comparison as the reader should see it: "networks/a.study.json, scenario winter-peak".</summary>
 public sealed record CompareSide(string Path, string NetworkName, string? Scenario)
 {
-    public string Label => $"{Path}, {(Scenario is null ? "loads as entered" : $"scenario {Scenario}")}";
+    public string Label => $"{Path}, {(Scenario is null ? "as entered" : $"scenario {Scenario}")}";
 }
 
 public static class CompareReport
@@ -44,7 +44,8 @@ public static class CompareReport
         return doc;
     }
 
-    private static string Summary(CaseComparisonResult r)
+    /// <summary>The largest voltage change and how many buses the two cases share, add and remove (also the TUI's Compare tab).</summary>
+    public static string Summary(CaseComparisonResult r)
     {
         var shared = r.Buses.Where(b => b.DeltaPu is not null).ToList();
         int added = r.Buses.Count(b => b.Membership == CaseMembership.Added);
@@ -56,5 +57,5 @@ public static class CompareReport
 
     private static string Describe(CompareSide s) =>
         (string.IsNullOrWhiteSpace(s.NetworkName) ? s.Path : $"{s.NetworkName} [{s.Path}]")
-        + $" ({(s.Scenario is null ? "loads as entered" : $"scenario {s.Scenario}")})";
+        + $" ({(s.Scenario is null ? "as entered" : $"scenario {s.Scenario}")})";
 }

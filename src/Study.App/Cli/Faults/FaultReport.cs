@@ -22,7 +22,7 @@ public static class FaultReport
         var doc = new ReportDocument($"Fault levels: {LoadFlowReport.Title(network, path)}") { Caution = r.Caution };
         doc.Input("file", path);
         if (!string.IsNullOrWhiteSpace(network.Name)) doc.Input("network", network.Name);
-        doc.Input("scenario", scenario is null ? "loads as entered" : $"scenario {scenario}");
+        doc.Input("scenario", scenario is null ? "as entered" : $"scenario {scenario}");
         doc.Input("method", method);
         doc.Input("levels", level);
         doc.Input("fault types", string.Join(", ", request.Kinds.Select(k => k.Code())));

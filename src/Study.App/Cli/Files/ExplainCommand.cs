@@ -14,7 +14,7 @@ public sealed class ExplainCommand : CliCommand
     protected override void Declare(Declaration d) => d
         .Positional("FILE", "a network file or IEEE Common Format case")
         .Positional("ID", "the element to explain")
-        .Value("scenario", "NAME", "scale loads as the named scenario does (default: loads as entered)");
+        .Value("scenario", "NAME", "scale loads as the named scenario does (default: as entered)");
 
     protected override int Execute(Arguments args, CommandContext context)
     {

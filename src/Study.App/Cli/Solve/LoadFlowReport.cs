@@ -11,7 +11,7 @@ public static class LoadFlowReport
     public static ReportDocument Build(string path, Network network, LoadFlowResult r, PublishedComparison? published,
         LoadFlowOptions? options = null)
     {
-        string scenario = r.Scenario is null ? "loads as entered" : $"scenario {r.Scenario}";
+        string scenario = r.Scenario is null ? "as entered" : $"scenario {r.Scenario}";
         var doc = new ReportDocument($"Load flow: {Title(network, path)} ({scenario})");
         AddInputs(doc, path, network, scenario, options ?? LoadFlowOptions.Default);
         if (!r.Converged)

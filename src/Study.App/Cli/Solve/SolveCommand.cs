@@ -13,7 +13,7 @@ public sealed class SolveCommand : CliCommand
     public override string Summary => "solve the load flow (Newton-Raphson) and report voltages, flows, losses and violations";
     protected override void Declare(Declaration d) => d
         .Positional("FILE", "a network file or IEEE Common Format case")
-        .Value("scenario", "NAME", "scale loads as the named scenario does (default: loads as entered)")
+        .Value("scenario", "NAME", "scale loads as the named scenario does (default: as entered)")
         .Flag("json", "machine-readable result")
         .Value("csv", "DIR", "write buses.csv, branches.csv, taps.csv, violations.csv into DIR")
         .Value("markdown", "FILE", "write the report as Markdown, with the inputs, to attach to a study note")

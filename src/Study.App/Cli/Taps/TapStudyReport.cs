@@ -17,7 +17,7 @@ public static class TapStudyReport
     {
         var doc = new ReportDocument($"Tap study: transformer {r.Transformer} in {LoadFlowReport.Title(network, path)}");
         string band = r.Band is { } b ? $"{Fixed(b.Low, 3)}–{Fixed(b.High, 3)} pu" : "each bus's vMin–vMax";
-        string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0] is null ? "loads as entered" : "scenarios " + string.Join(", ", r.Scenarios);
+        string scenarios = r.Scenarios.Count == 1 && r.Scenarios[0] is null ? "as entered" : "scenarios " + string.Join(", ", r.Scenarios);
         LoadFlowReport.AddInputs(doc, path, network, scenarios, options ?? LoadFlowOptions.Default);
         doc.Input("transformer", $"{r.Transformer}, positions {r.Min}..{r.Max} at {Fixed(r.StepPercent, 2)} % a step");
         doc.Input("watched buses", string.Join(", ", r.WatchBuses));

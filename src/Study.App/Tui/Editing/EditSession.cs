@@ -13,8 +13,8 @@ public sealed record DeleteResult(bool Deleted, IReadOnlyList<ElementReference> 
 /// </summary>
 public sealed class EditSession
 {
-    private readonly Stack<Network> undo = new();
-    private readonly Stack<Network> redo = new();
+    private readonly Stack<(Network Network, string What)> undo = new();
+    private readonly Stack<(Network Network, string What)> redo = new();
     private readonly string userFolder;
     private Network saved;
 
@@ -27,7 +27,11 @@ public sealed class EditSession
         this.userFolder = userFolder;
         RecoveryPath = RecoveryFile.PathFor(path, isDemo, userFolder);
         RecoveryWaiting = RecoveryFile.IsWaiting(path, RecoveryPath);
+        if (path is not null && ScenarioMemory.Read(userFolder, path) is { } chosen && network.FindScenario(chosen) is { } scenario)
+            activeScenario = scenario.Name;
     }
+
+    private string? activeScenario;
 
     public Network Network { get; private set; }
 
@@ -43,8 +47,25 @@ public sealed class EditSession
     public bool CanUndo => undo.Count > 0;
     public bool CanRedo => redo.Count > 0;
 
-    /// <summary>The scenario studies run in; null for the network as entered.</summary>
-    public string? ActiveScenario { get; set; }
+    /// <summary>
+    /// The scenario studies run in; null for the case as entered. Remembered per file in the user's
+    /// folder (<see cref="ScenarioMemory"/>), so the file opens in it again.
+    /// </summary>
+    public string? ActiveScenario
+    {
+        get => activeScenario;
+        set
+        {
+            activeScenario = value;
+            if (Path is not null) ScenarioMemory.Write(userFolder, Path, value);
+        }
+    }
+
+    /// <summary>What <see cref="Undo"/> would undo ("add bus B4"); null when there is nothing.</summary>
+    public string? UndoName => undo.Count > 0 ? undo.Peek().What : null;
+
+    /// <summary>What <see cref="Redo"/> would redo; null when there is nothing.</summary>
+    public string? RedoName => redo.Count > 0 ? redo.Peek().What : null;
 
     public string RecoveryPath { get; private set; }
 
@@ -89,7 +110,7 @@ public sealed class EditSession
         string id = ElementLists.Of(kind).IdOf(element);
         if (!ElementLists.IsIdFree(Network, kind, id))
             throw new ArgumentException($"id '{id}' is already used by another {ElementKinds.FamilyOf(kind).ToString().ToLowerInvariant()}");
-        Apply(ElementLists.Add(Network, kind, element));
+        Apply(ElementLists.Add(Network, kind, element), $"add {ElementKinds.Label(kind)} {id}");
     }
 
     /// <summary>Replaces an element; renaming a bus renames every reference to it as well.</summary>
@@ -101,7 +122,7 @@ public sealed class EditSession
             throw new ArgumentException($"id '{newId}' is already used");
         Network next = ElementLists.Replace(Network, kind, id, element);
         if (kind == ElementKind.Bus && newId != id) next = BusReferences.Rename(next, id, newId);
-        Apply(next);
+        Apply(next, $"edit {ElementKinds.Label(kind)} {id}" + (newId != id ? $" (renamed {newId})" : ""));
     }
 
     /// <summary>Elements that would be left dangling by deleting this element (only buses are referenced).</summary>
@@ -114,7 +135,8 @@ public sealed class EditSession
         if (ElementLists.Find(Network, kind, id) is null) throw new ArgumentException($"no {ElementKinds.Label(kind)} '{id}'");
         IReadOnlyList<ElementReference> refs = ReferencesTo(kind, id);
         if (refs.Count > 0 && !cascade) return new DeleteResult(false, refs);
-        Apply(refs.Count > 0 ? BusReferences.DeleteWithConnected(Network, id) : ElementLists.Remove(Network, kind, id));
+        Apply(refs.Count > 0 ? BusReferences.DeleteWithConnected(Network, id) : ElementLists.Remove(Network, kind, id),
+            $"delete {ElementKinds.Label(kind)} {id}" + (refs.Count > 0 ? " with what is connected to it" : ""));
         return new DeleteResult(true, refs);
     }
 
@@ -123,7 +145,7 @@ public sealed class EditSession
     {
         object element = ElementLists.Find(Network, kind, id) ?? throw new ArgumentException($"no {ElementKinds.Label(kind)} '{id}'");
         string newId = ElementLists.NextFreeId(Network, kind, id);
-        Apply(ElementLists.Add(Network, kind, ElementLists.Of(kind).WithId(element, newId)));
+        Apply(ElementLists.Add(Network, kind, ElementLists.Of(kind).WithId(element, newId)), $"copy {ElementKinds.Label(kind)} {id} as {newId}");
         return newId;
     }
 
@@ -131,20 +153,21 @@ public sealed class EditSession
     public bool SetTapPosition(string transformerId, int position)
     {
         Network n = Network;
+        string what = $"set {transformerId} tap to {Study.App.Reports.Labels.Position(position)}";
         if (n.Transformers.FirstOrDefault(t => t.Id == transformerId) is { Tap: { } tap } t2)
-            Apply(ElementLists.Replace(n, ElementKind.Transformer, transformerId, t2 with { Tap = tap with { Position = position } }));
+            Apply(ElementLists.Replace(n, ElementKind.Transformer, transformerId, t2 with { Tap = tap with { Position = position } }), what);
         else if (n.ThreeWindingTransformers.FirstOrDefault(t => t.Id == transformerId) is { Tap: { } tap3 } t3)
-            Apply(ElementLists.Replace(n, ElementKind.ThreeWindingTransformer, transformerId, t3 with { Tap = tap3 with { Position = position } }));
+            Apply(ElementLists.Replace(n, ElementKind.ThreeWindingTransformer, transformerId, t3 with { Tap = tap3 with { Position = position } }), what);
         else
             return false;
         return true;
     }
 
-    /// <summary>Makes <paramref name="next"/> the current network as one undoable edit.</summary>
-    public void Apply(Network next)
+    /// <summary>Makes <paramref name="next"/> the current network as one undoable edit, named <paramref name="what"/> for the status line.</summary>
+    public void Apply(Network next, string what = "edit")
     {
         if (ReferenceEquals(next, Network)) return;
-        undo.Push(Network);
+        undo.Push((Network, what));
         redo.Clear();
         Network = next;
         AfterChange();
@@ -153,8 +176,9 @@ public sealed class EditSession
     public bool Undo()
     {
         if (undo.Count == 0) return false;
-        redo.Push(Network);
-        Network = undo.Pop();
+        (Network previous, string what) = undo.Pop();
+        redo.Push((Network, what));
+        Network = previous;
         AfterChange();
         return true;
     }
@@ -162,8 +186,9 @@ public sealed class EditSession
     public bool Redo()
     {
         if (redo.Count == 0) return false;
-        undo.Push(Network);
-        Network = redo.Pop();
+        (Network next, string what) = redo.Pop();
+        undo.Push((Network, what));
+        Network = next;
         AfterChange();
         return true;
     }
@@ -188,6 +213,7 @@ public sealed class EditSession
         IsImported = false;
         RecoveryPath = RecoveryFile.PathFor(full, false, userFolder);
         saved = Network;
+        ScenarioMemory.Write(userFolder, full, activeScenario);
         Changed?.Invoke();
     }
 
@@ -196,7 +222,7 @@ public sealed class EditSession
     {
         Network recovered = NetworkFile.Read(RecoveryPath);
         RecoveryWaiting = false;
-        undo.Push(Network);
+        undo.Push((Network, "load the recovered edits"));
         Network = recovered;
         Changed?.Invoke();
     }

@@ -1,5 +1,6 @@
 // One editable field of an element: label, unit, default, and how to read and write it as text.
 using System.Globalization;
+using Study.Core.Model;
 
 namespace Study.App.Tui.Editing;
 
@@ -22,7 +23,16 @@ public sealed record ElementField(
 
     /// <summary>This field, editing the file key <paramref name="key"/>.</summary>
     public ElementField Keyed(string key) => this with { Key = key };
+
+    /// <summary>The values the field may take, to pick from a list (F4 in the form): bus ids, choices, yes/no; null for free text.</summary>
+    public Func<Network, IReadOnlyList<FieldOption>>? Options { get; init; }
+
+    /// <summary>True when blank is not allowed: the hint says "required" rather than a default.</summary>
+    public bool Required { get; init; }
 }
+
+/// <summary>One value a field may take, with words that help choose it ("CQ11", "11 kV · Cold Quay 11 kV board").</summary>
+public sealed record FieldOption(string Value, string Description = "");
 
 /// <summary>Builders for typed fields; empty text means "not given" for optional values.</summary>
 public static class Field
@@ -39,46 +49,74 @@ public static class Field
             return set((T)e, id)!;
         });
 
+    /// <summary>A reference to a bus, picked from the network's buses (F4) or typed; the validator names a bus that does not exist.</summary>
+    public static ElementField BusRef<T>(string name, Func<T, string> get, Func<T, string, T> set) =>
+        Id(name, get, set) with { Options = BusOptions };
+
+    /// <summary>The buses of a network as choices: id, then base kV and name.</summary>
+    public static IReadOnlyList<FieldOption> BusOptions(Network n) =>
+        n.Buses.Select(b => new FieldOption(b.Id, $"{(b.Kv > 0 ? Format(b.Kv) + " kV" : "kV not stated")}{(b.Name is { } name ? " · " + name : "")}")).ToList();
+
+    /// <summary>A number that has no default: blank is an error naming the field.</summary>
+    public static ElementField RequiredNumber<T>(string name, string unit, Func<T, double> get, Func<T, double, T> set)
+    {
+        string header = unit.Length > 0 ? $"{name} {unit}" : name;
+        return new ElementField(name, unit, "", e => Format(get((T)e)), (e, text) =>
+        {
+            if (text.Trim().Length == 0) throw new FormatException($"{header} is required");
+            return set((T)e, Parse(header, text))!;
+        }) { Required = true };
+    }
+
     public static ElementField Text<T>(string name, Func<T, string?> get, Func<T, string?, T> set) =>
         new(name, "", "", e => get((T)e) ?? "", (e, text) => set((T)e, text.Trim().Length == 0 ? null : text.Trim())!);
 
     public static ElementField Number<T>(string name, string unit, double defaultValue, Func<T, double> get, Func<T, double, T> set) =>
         new(name, unit, Format(defaultValue), e => Format(get((T)e)), (e, text) =>
-            set((T)e, text.Trim().Length == 0 ? defaultValue : Parse(name, text))!);
+            set((T)e, text.Trim().Length == 0 ? defaultValue : Parse(HeaderOf(name, unit), text))!);
 
     public static ElementField Optional<T>(string name, string unit, string defaultText, Func<T, double?> get, Func<T, double?, T> set) =>
         new(name, unit, defaultText, e => get((T)e) is double v ? Format(v) : "", (e, text) =>
-            set((T)e, text.Trim().Length == 0 ? null : Parse(name, text))!);
+            set((T)e, text.Trim().Length == 0 ? null : Parse(HeaderOf(name, unit), text))!);
 
     public static ElementField Integer<T>(string name, string unit, int defaultValue, Func<T, int> get, Func<T, int, T> set) =>
         new(name, unit, defaultValue.ToString(Inv), e => get((T)e).ToString(Inv), (e, text) =>
         {
             if (text.Trim().Length == 0) return set((T)e, defaultValue)!;
-            if (!int.TryParse(text.Trim(), NumberStyles.Integer, Inv, out int v)) throw new FormatException($"{name}: '{text.Trim()}' is not a whole number");
+            if (!int.TryParse(text.Trim(), NumberStyles.Integer, Inv, out int v))
+                throw new FormatException($"{HeaderOf(name, unit)}: '{text.Trim()}' is not a whole number");
             return set((T)e, v)!;
         });
 
+    public static IReadOnlyList<FieldOption> YesNo { get; } = [new("yes"), new("no")];
+
     public static ElementField Flag<T>(string name, bool defaultValue, Func<T, bool> get, Func<T, bool, T> set) =>
-        new(name, "", defaultValue ? "yes" : "no", e => get((T)e) ? "yes" : "no", (e, text) =>
-            set((T)e, text.Trim().ToLowerInvariant() switch
-            {
-                "" => defaultValue,
-                "yes" or "y" or "true" or "1" => true,
-                "no" or "n" or "false" or "0" => false,
-                _ => throw new FormatException($"{name}: answer yes or no"),
-            })!);
+        new ElementField(name, "", defaultValue ? "yes" : "no", e => get((T)e) ? "yes" : "no", (e, text) =>
+            set((T)e, YesOrNo(name, text) ?? defaultValue)!) { Options = _ => YesNo };
+
+    /// <summary>yes / no in the spellings people type; null for blank.</summary>
+    public static bool? YesOrNo(string name, string text) => text.Trim().ToLowerInvariant() switch
+    {
+        "" => null,
+        "yes" or "y" or "true" or "1" => true,
+        "no" or "n" or "false" or "0" => false,
+        _ => throw new FormatException($"{name}: answer yes or no"),
+    };
+
+    private static string HeaderOf(string name, string unit) => unit.Length > 0 ? $"{name} {unit}" : name;
 
     /// <summary>A choice among enum values, written in the file's lower-case spelling.</summary>
     public static ElementField Choice<T, TEnum>(string name, TEnum defaultValue, Func<T, TEnum> get, Func<T, TEnum, T> set)
         where TEnum : struct, Enum =>
-        new(name, string.Join("/", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant())), defaultValue.ToString().ToLowerInvariant(),
+        new ElementField(name, string.Join("/", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant())), defaultValue.ToString().ToLowerInvariant(),
             e => get((T)e).ToString().ToLowerInvariant(), (e, text) =>
             {
                 if (text.Trim().Length == 0) return set((T)e, defaultValue)!;
                 if (!Enum.TryParse(text.Trim(), ignoreCase: true, out TEnum v) || !Enum.IsDefined(v))
                     throw new FormatException($"{name}: one of {string.Join(", ", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant()))}");
                 return set((T)e, v)!;
-            });
+            })
+        { Options = _ => Enum.GetNames<TEnum>().Select(s => new FieldOption(s.ToLowerInvariant())).ToList() };
 
     /// <summary>A choice among enum values with the spellings given (the file's own), e.g. km / line / pu.</summary>
     public static ElementField Named<T, TEnum>(string name, IReadOnlyList<(TEnum Value, string Text)> spellings, TEnum defaultValue,
@@ -86,14 +124,15 @@ public static class Field
         where TEnum : struct, Enum
     {
         string Spell(TEnum v) => spellings.First(s => EqualityComparer<TEnum>.Default.Equals(s.Value, v)).Text;
-        return new(name, string.Join("/", spellings.Select(s => s.Text)), Spell(defaultValue), e => Spell(get((T)e)), (e, text) =>
+        return new ElementField(name, string.Join("/", spellings.Select(s => s.Text)), Spell(defaultValue), e => Spell(get((T)e)), (e, text) =>
         {
             string t = text.Trim().ToLowerInvariant();
             if (t.Length == 0) return set((T)e, defaultValue)!;
             foreach (var (value, spelled) in spellings)
                 if (spelled == t) return set((T)e, value)!;
             throw new FormatException($"{name}: one of {string.Join(", ", spellings.Select(s => s.Text))}");
-        });
+        })
+        { Options = _ => spellings.Select(s => new FieldOption(s.Text)).ToList() };
     }
 
     private static double Parse(string name, string text)

@@ -30,9 +30,14 @@ public static class ElementFields
         _ => kind + "s",
     };
 
-    /// <summary>What the form's fields make, tidied once every field is written: a line's blank sequences are "not given".</summary>
-    public static object Finish(ElementKind kind, object element) =>
-        kind == ElementKind.Line ? BranchFields.Normalise((Line)element) : element;
+    /// <summary>What the form's fields make, tidied once every field is written: a line's blank sequences and a blank no-load are "not given".</summary>
+    public static object Finish(ElementKind kind, object element) => element switch
+    {
+        Line line => BranchFields.Normalise(line),
+        Transformer t => t with { NoLoad = WindingFields.Normalise(t.NoLoad) },
+        ThreeWindingTransformer t => t with { NoLoad = WindingFields.Normalise(t.NoLoad) },
+        _ => element,
+    };
 
     /// <summary>A new element with a free id, connected to the first bus(es), other values at their defaults.</summary>
     public static object New(Network n, ElementKind kind)

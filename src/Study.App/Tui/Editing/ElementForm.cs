@@ -5,10 +5,15 @@ using Study.Core.Model.Validation;
 namespace Study.App.Tui.Editing;
 
 /// <summary>What the current field texts amount to.</summary>
-public sealed record FormState(object? Element, IReadOnlyList<string> Problems, IReadOnlyList<string> Preview)
+/// <param name="Element">The element the texts make; null when a text does not parse or the id is taken.</param>
+/// <param name="Problems">Every finding, "error: …" or "warning: …", fields named by their labels.</param>
+/// <param name="BadFields">The fields with an error, in form order (the first gets focus on a refused Enter).</param>
+public sealed record FormState(object? Element, IReadOnlyList<string> Problems, IReadOnlyList<string> Preview, IReadOnlyList<int> BadFields)
 {
-    /// <summary>True when the texts make an element (numbers parse, id free); validator findings do not block.</summary>
-    public bool CanAccept => Element is not null;
+    public bool HasErrors => Problems.Any(p => p.StartsWith("error", StringComparison.Ordinal));
+
+    /// <summary>True when the texts make an element the validator finds no error in (the same rules as <c>study check</c>); warnings do not block.</summary>
+    public bool CanAccept => Element is not null && !HasErrors;
 }
 
 /// <summary>
@@ -34,6 +39,9 @@ public sealed class ElementForm
     }
 
     public ElementKind Kind { get; }
+
+    /// <summary>The network the element is edited in (bus choices, validation).</summary>
+    public Network Network => network;
     public string? OriginalId { get; }
     public IReadOnlyList<ElementField> Fields { get; }
 
@@ -44,9 +52,13 @@ public sealed class ElementForm
         ? $"Add {ElementKinds.Label(Kind)}"
         : $"Edit {ElementKinds.Label(Kind)} {OriginalId}";
 
+    /// <summary>True when any text differs from what the form opened with (Esc then asks before discarding).</summary>
+    public bool Changed => Fields.Select((f, i) => f.Read(start) != Texts[i]).Any(x => x);
+
     public FormState Evaluate()
     {
         var problems = new List<string>();
+        var bad = new SortedSet<int>();
         object element = start;
         for (int i = 0; i < Fields.Count; i++)
         {
@@ -57,14 +69,15 @@ public sealed class ElementForm
             catch (FormatException e)
             {
                 problems.Add("error: " + e.Message);
+                bad.Add(i);
             }
         }
-        if (problems.Count > 0) return new FormState(null, problems, []);
+        if (problems.Count > 0) return new FormState(null, problems, [], bad.ToList());
         element = ElementFields.Finish(Kind, element);
 
         string id = ElementLists.Of(Kind).IdOf(element);
         if (!ElementLists.IsIdFree(network, Kind, id, except: OriginalId))
-            return new FormState(null, [$"error: id '{id}' is already used in this family of elements"], []);
+            return new FormState(null, [$"error: {Fields[0].Header}: '{id}' is already used in this family of elements"], [], [0]);
 
         Network candidate = OriginalId is null
             ? ElementLists.Add(network, Kind, element)
@@ -76,12 +89,24 @@ public sealed class ElementForm
             string severity = p.Severity == Severity.Error ? "error" : "warning";
             string message = InLabels(p.Message);
             problems.Add(p.Field is null ? $"{severity}: {message}" : $"{severity}: {LabelOf(p.Field)}: {message}");
+            if (p.IsError && p.Field is not null && FieldOf(p.Field) is int field) bad.Add(field);
         }
-        return new FormState(element, problems, PerUnitPreview.Lines(candidate, Kind, id));
+        return new FormState(element, problems, PerUnitPreview.Lines(candidate, Kind, id), bad.ToList());
     }
 
-    /// <summary>The form's label for a file key ("Present position" for tap.position); the key itself when no field edits it.</summary>
+    /// <summary>The form's label, with its unit, for a file key ("Impedance %" for zPercent); the key itself when no field edits it.</summary>
     public string LabelOf(string key) => Labels().GetValueOrDefault(key) ?? key;
+
+    /// <summary>The first field editing <paramref name="key"/> or something inside it ("z0" finds "z0.r"); null when none does.</summary>
+    public int? FieldOf(string key)
+    {
+        int exact = Fields.ToList().FindIndex(f => f.Key == key);
+        if (exact >= 0) return exact;
+        int inside = Fields.ToList().FindIndex(f => f.Key is { } k && k.StartsWith(key + ".", StringComparison.Ordinal));
+        if (inside >= 0) return inside;
+        int outer = Fields.ToList().FindIndex(f => f.Key is { } k && key.StartsWith(k + ".", StringComparison.Ordinal));
+        return outer >= 0 ? outer : null;
+    }
 
     /// <summary>
     /// A validator message in the form's words: every file key a field edits is replaced by that field's
@@ -95,7 +120,7 @@ public sealed class ElementForm
         return message;
     }
 
-    /// <summary>Each file key with the label of the field (or fields, joined: "Lowest position / Highest position") that edit it.</summary>
+    /// <summary>Each file key with the label and unit of the field (or fields, joined: "Lowest position / Highest position") that edit it.</summary>
     private Dictionary<string, string> Labels() => Fields.Where(f => f.Key is not null).GroupBy(f => f.Key!)
-        .ToDictionary(g => g.Key, g => string.Join(" / ", g.Select(f => f.Name)));
+        .ToDictionary(g => g.Key, g => string.Join(" / ", g.Select(f => f.Header)));
 }

@@ -9,7 +9,8 @@ public static class NodeFields
     public static IReadOnlyList<ElementField> Bus { get; } =
     [
         Field.Id<Bus>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Number<Bus>("Base", "kV", 0, e => e.Kv, (e, v) => e with { Kv = v }).Keyed("kv"),
+        // Required: 0 is allowed (a per-unit-only case) but is never what a blank should mean.
+        Field.RequiredNumber<Bus>("Base", "kV", e => e.Kv, (e, v) => e with { Kv = v }).Keyed("kv"),
         Field.Number<Bus>("Vmin", "pu", 0.95, e => e.VMin, (e, v) => e with { VMin = v }).Keyed("vMin"),
         Field.Number<Bus>("Vmax", "pu", 1.05, e => e.VMax, (e, v) => e with { VMax = v }).Keyed("vMax"),
         Field.Text<Bus>("Zone", e => e.Zone, (e, v) => e with { Zone = v }).Keyed("zone"),
@@ -20,7 +21,7 @@ public static class NodeFields
     public static IReadOnlyList<ElementField> Load { get; } =
     [
         Field.Id<Load>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Load>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Load>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Number<Load>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
         Field.Number<Load>("Q", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
         Field.Number<Load>("Const. Z share", "", 0, e => (e.Zip ?? ZipMix.ConstantPower).Z,
@@ -35,7 +36,7 @@ public static class NodeFields
     public static IReadOnlyList<ElementField> Shunt { get; } =
     [
         Field.Id<Shunt>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Shunt>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Shunt>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Number<Shunt>("Q (+cap)", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
         Field.Number<Shunt>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
         Field.Flag<Shunt>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
@@ -60,7 +61,7 @@ public static class NodeFields
     public static IReadOnlyList<ElementField> Breaker { get; } =
     [
         Field.Id<Breaker>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Breaker>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Breaker>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Number<Breaker>("Breaking", "kA", 0, e => e.InterruptingKa, (e, v) => e with { InterruptingKa = v }).Keyed("interruptingKa"),
         Field.Number<Breaker>("Peak", "kA", 0, e => e.PeakKa, (e, v) => e with { PeakKa = v }).Keyed("peakKa"),
         Field.Flag<Breaker>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),

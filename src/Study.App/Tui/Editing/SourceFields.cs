@@ -9,7 +9,7 @@ public static class SourceFields
     public static IReadOnlyList<ElementField> Supply { get; } =
     [
         Field.Id<Supply>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Supply>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Supply>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Number<Supply>("Vset", "pu", 1, e => e.VSet, (e, v) => e with { VSet = v }).Keyed("vSet"),
         Field.Number<Supply>("Angle", "°", 0, e => e.AngleDeg, (e, v) => e with { AngleDeg = v }).Keyed("angleDeg"),
         Field.Optional<Supply>("S''k max", "MVA", "", e => e.ScMvaMax, (e, v) => e with { ScMvaMax = v }).Keyed("scMvaMax"),
@@ -22,7 +22,7 @@ public static class SourceFields
     public static IReadOnlyList<ElementField> Generator { get; } =
     [
         Field.Id<Generator>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Generator>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Generator>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Choice<Generator, GeneratorMode>("Mode", GeneratorMode.Pv, e => e.Mode, (e, v) => e with { Mode = v }).Keyed("mode"),
         Field.Number<Generator>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
         Field.Number<Generator>("Q", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
@@ -36,8 +36,7 @@ public static class SourceFields
         Field.Optional<Generator>("x0", "pu", "", e => e.X0Pu, (e, v) => e with { X0Pu = v }).Keyed("x0Pu"),
         Field.Optional<Generator>("X/R", "", "", e => e.Xr, (e, v) => e with { Xr = v }).Keyed("xr"),
         Field.Optional<Generator>("Power factor", "", "0.85", e => e.PowerFactor, (e, v) => e with { PowerFactor = v }).Keyed("powerFactor"),
-        Field.Flag<Generator>("Neutral earthed", true, e => (e.Neutral ?? new Earthing()).Grounded,
-            (e, v) => e with { Neutral = (e.Neutral ?? new Earthing()) with { Grounded = v } }).Keyed("neutral.grounded"),
+        .. WindingFields.Earthing<Generator>("Neutral", "neutral", e => e.Neutral, (e, n) => e with { Neutral = n }),
         Field.Flag<Generator>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 }

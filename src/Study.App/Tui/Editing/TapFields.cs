@@ -20,7 +20,7 @@ public static class TapFields
             Field.Text<T>("Regulated bus", e => get(e)?.Regulate?.Bus, (e, v) => Edit(e, t => t with
             {
                 Regulate = v is null ? null : Reg(t) with { Bus = v },
-            })).Keyed("tap.regulate.bus"),
+            })).Keyed("tap.regulate.bus") with { Options = Field.BusOptions },
             Field.Number<T>("Target voltage", "pu", 1, e => get(e)?.Regulate?.VTarget ?? 1,
                 (e, v) => get(e)?.Regulate is null ? e : Edit(e, t => t with { Regulate = Reg(t) with { VTarget = v } })).Keyed("tap.regulate.vTarget"),
             Field.Number<T>("Dead band", "pu", 0.015, e => get(e)?.Regulate?.BandPu ?? 0.015,

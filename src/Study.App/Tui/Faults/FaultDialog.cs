@@ -38,8 +38,8 @@ public static class FaultDialog
         var where = new OptionSelector
         {
             X = 10, Y = 7, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
-            Labels = [form.SelectedBus is { } bus ? $"bus {bus}" : "selected bus (none)", "all buses"],
-            Value = form.AllBuses ? 1 : 0,
+            Labels = ["all buses", form.SelectedBus is { } bus ? $"only bus {bus} (selected in the Buses table)" : "only the selected bus (none selected)"],
+            Value = form.AllBuses ? 0 : 1,
         };
         var caution = new TextPane { X = 0, Y = 9, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
@@ -53,7 +53,7 @@ public static class FaultDialog
                 if (boxes[i].Value == CheckState.Checked) form.Kinds.Add(FaultForm.AllKinds[i]);
             form.Method = method.Value == 1 ? FaultMethod.LoadFlow : FaultMethod.Iec60909;
             form.Level = level.Value == 1 ? FaultLevel.Min : FaultLevel.Max;
-            form.AllBuses = where.Value == 1;
+            form.AllBuses = where.Value != 1;
         }
         return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
     }

@@ -17,8 +17,8 @@ public sealed class FaultForm(string? selectedBus)
     /// <summary>The bus under the cursor when the dialog opened; null when no bus is selected.</summary>
     public string? SelectedBus { get; } = selectedBus;
 
-    /// <summary>True: every bus; false: <see cref="SelectedBus"/> only. Defaults to the selected bus when there is one.</summary>
-    public bool AllBuses { get; set; } = selectedBus is null;
+    /// <summary>True (the default): every bus; false: <see cref="SelectedBus"/> only, when the user asks for it.</summary>
+    public bool AllBuses { get; set; } = true;
 
     public static string KindLabel(FaultKind kind) => kind switch
     {

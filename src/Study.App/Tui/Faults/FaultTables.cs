@@ -1,6 +1,7 @@
-// Fault results for the Faults tab: a heading line, then levels and breaker duty through their column specs (FaultColumns).
+// Fault results for the Faults tab: a heading, then levels and breaker duty through their column specs (FaultColumns).
 using Study.App.Reports;
 using Study.Core.Faults;
+using Study.Core.Model;
 
 namespace Study.App.Tui.Faults;
 
@@ -9,10 +10,19 @@ public static class FaultTables
 {
     public static string[] LevelHeaders => FaultColumns.ScreenLevels(false).Headings;
 
+    /// <summary>The levels' columns for a result: without Z0 when the zero sequence was not built (it would read "open").</summary>
+    private static ColumnSpec<Study.Core.Faults.ShortCircuitLevel> LevelColumns(FaultResult r)
+    {
+        var spec = FaultColumns.ScreenLevels(r.PerUnitOnly);
+        if (r.LeftOut.Count == 0) return spec;
+        string[] keep = spec.Columns.Where(c => c.IsReadable && c.Header != "Z0").Select(c => c.Key ?? c.Header!).ToArray();
+        return spec.Select(keep);
+    }
+
     public static string[] BreakerHeaders => FaultColumns.ScreenBreakers.Headings;
 
-    /// <summary>One line on how the faults were calculated, and the engine's notes.</summary>
-    public static string Heading(FaultResult r)
+    /// <summary>How the faults were calculated, then every note and missing datum in full (<see cref="FaultNotes"/>).</summary>
+    public static string Heading(FaultResult r, Network? network = null)
     {
         string method = r.Method == FaultMethod.Iec60909 ? "IEC 60909" : "from load flow";
         string level = r.Level == Study.Core.Units.FaultLevel.Max ? "max" : "min";
@@ -20,11 +30,12 @@ public static class FaultTables
         int over = r.Breakers.Count(b => b.Status == DutyStatus.Over), near = r.Breakers.Count(b => b.Status == DutyStatus.Warning);
         string head = $"{method} {level} · {buses} bus(es) · breakers: {over} over {Marks.Over}, {near} near {Marks.Near}"
             + (r.PerUnitOnly ? " · kV not stated: per unit only" : "");
-        return r.Notes.Count == 0 ? head : head + "\nNotes: " + string.Join("; ", r.Notes);
+        IReadOnlyList<string> notes = FaultNotes.Lines(r, network ?? new Network());
+        return notes.Count == 0 ? head : head + "\n" + string.Join("\n", notes);
     }
 
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>
-    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenLevels(r.PerUnitOnly), r.Faults);
+    public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(LevelColumns(r), r.Faults);
 
     public static TextTableSource Breakers(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenBreakers, r.Breakers);
 }

@@ -1,24 +1,27 @@
-// The Faults tab: the caution fixed at the top, then fault levels and breaker duty in their own tables.
+// The Faults tab: the caution fixed at the top, the notes in full, then fault levels and breaker duty.
 using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Faults;
+using Study.Core.Model;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.ViewBase;
-using Terminal.Gui.Views;
 using Attr = Terminal.Gui.Drawing.Attribute;
 
 namespace Study.App.Tui.Faults;
 
 /// <summary>
-/// The caution is its own pane above the tables and never scrolls with them. Breaker rows over their
-/// rating are marked "▲ OVER" (and coloured); rows above 90 % are marked "△ near".
+/// The caution is its own pane above everything and never scrolls. Under it the heading says how the
+/// faults were calculated and gives every note and missing datum in full (it scrolls when long). The
+/// levels and the breaker duty share the rest, the focused table taking two thirds. Breaker rows over
+/// their rating are marked "▲ OVER" (and coloured); rows above 90 % "△ near".
 /// </summary>
 public sealed class FaultView : View
 {
+    private const string NotYet = "No fault study yet: F7 asks where and which faults.";
     private readonly TextPane caution = new() { CanFocus = false, Content = CautionText(FaultStudy.Caution) };
-    private readonly TextPane heading = new() { CanFocus = false, Content = "No fault study yet (F7)." };
-    private readonly TableView levels = ResultsView.ResultTable(FaultTables.LevelHeaders);
-    private readonly TableView breakers = ResultsView.ResultTable(FaultTables.BreakerHeaders);
+    private readonly TextPane heading = new() { CanFocus = false, Content = NotYet };
+    private readonly ResultTable levels = new(FaultTables.LevelHeaders);
+    private readonly ResultTable breakers = new(FaultTables.BreakerHeaders);
     private FaultResult? result;
 
     public FaultView()
@@ -26,32 +29,42 @@ public sealed class FaultView : View
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
-        caution.Height = Dim.Func(_ => TextPane.Wrap(caution.Content, Math.Max(1, Viewport.Width)).Count);
+        caution.Height = Dim.Func(_ => Wrapped(caution));
         heading.Y = Pos.Bottom(caution);
-        heading.Height = Dim.Func(_ => Math.Min(2, TextPane.Wrap(heading.Content, Math.Max(1, Viewport.Width)).Count));
+        heading.Height = Dim.Func(_ => Math.Min(HeadingRows, Wrapped(heading)));
         levels.Y = Pos.Bottom(heading);
-        levels.Height = Dim.Func(_ => Math.Max(3, (Viewport.Height - caution.Frame.Height - heading.Frame.Height) * 3 / 5));
-        breakers.Y = Pos.Bottom(levels);
-        breakers.Height = Dim.Fill();
         Add(caution, heading, levels, breakers);
-        breakers.Style.RowColorGetter = args => BreakerScheme(args.RowIndex);
+        FocusSplit.Stack(this, levels, breakers, () => Viewport.Height - caution.Frame.Height - heading.Frame.Height);
+        breakers.RowScheme = BreakerScheme;
     }
+
+    /// <summary>Rows the heading may take before it scrolls: a third of the tab, at least two.</summary>
+    private int HeadingRows => Math.Max(2, Viewport.Height / 3);
 
     public FaultResult? Result
     {
         get => result;
-        set
-        {
-            result = value;
-            caution.Content = CautionText(value?.Caution ?? FaultStudy.Caution);
-            heading.Content = value is null ? "No fault study yet (F7)." : FaultTables.Heading(value);
-            levels.Table = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
-            breakers.Table = value is null ? TextTableSource.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);
-            levels.Update();
-            breakers.Update();
-            SetNeedsLayout();
-        }
+        set => Show(value, null);
     }
+
+    /// <summary>Shows a result; <paramref name="network"/> (the one studied) lets notes name the form fields that change them.</summary>
+    public void Show(FaultResult? value, Network? network)
+    {
+        result = value;
+        caution.Content = CautionText(value?.Caution ?? FaultStudy.Caution);
+        heading.Content = value is null ? NotYet : FaultTables.Heading(value, network);
+        levels.Source = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
+        breakers.Source = value is null ? TextTableSource.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);
+        SetNeedsLayout();
+    }
+
+    protected override void OnSubViewsLaidOut(LayoutEventArgs args)
+    {
+        heading.CanFocus = Wrapped(heading) > heading.Frame.Height;
+        base.OnSubViewsLaidOut(args);
+    }
+
+    private int Wrapped(TextPane pane) => TextPane.Wrap(pane.Content, Math.Max(1, Viewport.Width)).Count;
 
     private static string CautionText(string caution) => "Caution: " + caution;
 

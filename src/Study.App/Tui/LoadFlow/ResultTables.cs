@@ -18,4 +18,7 @@ public static class ResultTables
     public static TextTableSource Buses(LoadFlowResult r) => TextTableSource.Of(ScreenBuses, r.Buses);
 
     public static TextTableSource Branches(LoadFlowResult r) => TextTableSource.Of(LoadFlowColumns.Branches, r.Branches);
+
+    /// <summary>The line above both tables: lowest and highest voltage, most loaded branch, loss.</summary>
+    public static string Highlights(LoadFlowResult r) => LoadFlowHighlights.Line(r);
 }

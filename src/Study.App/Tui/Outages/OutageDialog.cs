@@ -22,7 +22,7 @@ public static class OutageDialog
         var scenarios = new OptionSelector
         {
             X = 11, Y = 2, Width = Dim.Fill(),
-            Labels = [$"active only ({form.ActiveScenarioLabel})", form.ScenarioCount == 0 ? "all scenarios (none defined: as entered)" : $"all {form.ScenarioCount} scenarios"],
+            Labels = [$"the active scenario ({form.ActiveScenarioLabel})", form.ScenarioCount == 0 ? "all scenarios (none defined: as entered)" : $"all {form.ScenarioCount} scenarios"],
             Value = form.AllScenarios ? 1 : 0,
         };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running screening" };

@@ -10,7 +10,7 @@ public sealed class OutageForm(Network network, string? activeScenario)
     /// <summary>True: every scenario of the network; false: the active one (or loads as entered).</summary>
     public bool AllScenarios { get; set; }
 
-    public string ActiveScenarioLabel => activeScenario ?? "network as entered";
+    public string ActiveScenarioLabel => Study.App.Reports.Labels.Scenario(activeScenario);
 
     /// <summary>How many scenarios "all" means; with none the network is screened as entered.</summary>
     public int ScenarioCount => network.Scenarios.Count;

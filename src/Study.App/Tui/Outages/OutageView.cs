@@ -1,19 +1,20 @@
-// The Outages tab: one heading line per scenario, then the ranked outages of every scenario.
+// The Outages tab: one heading line per scenario and the legend, then the ranked outages of every scenario.
 using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Studies;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.ViewBase;
-using Terminal.Gui.Views;
 using Attr = Terminal.Gui.Drawing.Attribute;
 
 namespace Study.App.Tui.Outages;
 
-/// <summary>Shows what <see cref="OutageTables"/> lays out; rows that lose load or do not converge are coloured as well as worded.</summary>
+/// <summary>
+/// Shows what <see cref="OutageTables"/> lays out; rows that lose load or have no solution are coloured
+/// as well as worded. Enter on a row raises <see cref="Opened"/> with that outage.
+/// </summary>
 public sealed class OutageView : View
 {
-    private readonly TextPane heading = new() { CanFocus = false, Content = OutageTables.NotYet };
-    private readonly TableView table = ResultsView.ResultTable(OutageTables.Headers);
+    private readonly HeadedTable body = new(OutageTables.Headers) { MaxHeadingRows = 4 };
     private IReadOnlyList<OutageCase> cases = [];
     private OutageScreeningResult? result;
 
@@ -22,12 +23,19 @@ public sealed class OutageView : View
         Width = Dim.Fill();
         Height = Dim.Fill();
         CanFocus = true;
-        heading.Height = Dim.Func(_ => Math.Min(4, TextPane.Wrap(heading.Content, Math.Max(1, Viewport.Width)).Count));
-        table.Y = Pos.Bottom(heading);
-        table.Height = Dim.Fill();
-        Add(heading, table);
-        table.Style.RowColorGetter = args => RowScheme(args.RowIndex);
+        body.Heading = OutageTables.NotYet;
+        Add(body);
+        body.Table.RowScheme = RowScheme;
+        body.Table.Accepted += (_, _) =>
+        {
+            if (body.Table.SelectedRow is int row && row < cases.Count) Opened?.Invoke(cases[row]);
+        };
     }
+
+    /// <summary>Enter on an outage row.</summary>
+    public event Action<OutageCase>? Opened;
+
+    public ResultTable Table => body.Table;
 
     public OutageScreeningResult? Result
     {
@@ -36,10 +44,8 @@ public sealed class OutageView : View
         {
             result = value;
             cases = value is null ? [] : OutageTables.Cases(value);
-            heading.Content = value is null ? OutageTables.NotYet : OutageTables.Heading(value);
-            table.Table = value is null ? TextTableSource.Empty(OutageTables.Headers) : OutageTables.Outages(value);
-            table.Update();
-            SetNeedsLayout();
+            body.Heading = value is null ? OutageTables.NotYet : OutageTables.Heading(value);
+            body.Table.Source = value is null ? TextTableSource.Empty(OutageTables.Headers) : OutageTables.Outages(value);
         }
     }
 
@@ -49,7 +55,7 @@ public sealed class OutageView : View
         OutageTier tier = OutageTiers.Of(cases[row]);
         if (tier is OutageTier.Secure) return null;
         Attr normal = GetAttributeForRole(VisualRole.Normal);
-        return new Scheme(tier is OutageTier.Stressed
+        return new Scheme(tier is OutageTier.LimitsBroken
             ? new Attr(ColorName16.BrightYellow, normal.Background)
             : new Attr(ColorName16.White, ColorName16.Red));
     }

@@ -1,20 +1,33 @@
 // What each command does on the main screen: edits through the session, studies through the runner.
+using Study.App.Reports;
 using Study.App.Tui.Editing;
-using Study.App.Tui.LoadFlow;
 using Study.Core.Cases;
 using Study.Core.LoadFlow;
 using Study.Core.Model;
+using Study.Core.Model.Validation;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
 
 namespace Study.App.Tui.Shell;
 
 /// <summary>Runs a <see cref="TuiAction"/>. Keys arrive through <see cref="OnKeyDown"/>, the one key handler.</summary>
-public sealed class MainCommands(MainWindow main)
+public sealed class MainCommands
 {
+    /// <summary>How many errors the save warning lists before "and N more".</summary>
+    private const int ListedErrors = 8;
+
+    private readonly MainWindow main;
+
+    public MainCommands(MainWindow main)
+    {
+        this.main = main;
+        Studies = new StudyCommands(main);
+    }
+
     private IApplication App => main.App;
     private EditSession Session => main.Session;
-    private StudyCommands Studies { get; } = new(main);
+
+    public StudyCommands Studies { get; }
 
     /// <summary>The application-wide key handler: commands only while the main window is on top.</summary>
     public void OnKeyDown(object? sender, Key key)
@@ -44,6 +57,7 @@ public sealed class MainCommands(MainWindow main)
 
     public void Do(TuiAction action)
     {
+        main.Status.Message = null;
         switch (action)
         {
             case TuiAction.Open: Open(); break;
@@ -54,13 +68,14 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.Edit: if (main.SelectedId is { } id) Edit(id); break;
             case TuiAction.Delete: Delete(); break;
             case TuiAction.Duplicate: Duplicate(); break;
-            case TuiAction.Undo: Session.Undo(); break;
-            case TuiAction.Redo: Session.Redo(); break;
+            case TuiAction.Undo: Undo(); break;
+            case TuiAction.Redo: Redo(); break;
             case TuiAction.LoadFlow: LoadFlow(); break;
             case TuiAction.Fault: Studies.Fault(); break;
             case TuiAction.TapStudy: Studies.TapStudy(); break;
             case TuiAction.ApplyTap: Studies.ApplyRecommendedTap(); break;
             case TuiAction.Outages: Studies.Outages(); break;
+            case TuiAction.Compare: Studies.Compare(); break;
             case TuiAction.Scenario: ChooseScenario(); break;
             case TuiAction.Cancel: main.Runner.Cancel(); break;
             case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
@@ -70,8 +85,10 @@ public sealed class MainCommands(MainWindow main)
             case TuiAction.ShowTapStudy: main.Results.Value = main.Results.TapStudyTab; break;
             case TuiAction.ShowOutages: main.Results.Value = main.Results.OutagesTab; break;
             case TuiAction.ShowOneLine: main.Results.Value = main.Results.OneLineTab; break;
-            case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
             case TuiAction.ShowVoltageChart: main.Results.Value = main.Results.ChartTab; break;
+            case TuiAction.ShowCompare: main.Results.Value = main.Results.CompareTab; break;
+            case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
+            case TuiAction.Sort: Sort(); break;
             case TuiAction.Help: HelpDialog.Run(App); break;
         }
     }
@@ -84,6 +101,7 @@ public sealed class MainCommands(MainWindow main)
         if (id is null) Session.Add(kind, element);
         else Session.Replace(kind, id, element);
         main.Select(kind, ElementLists.Of(kind).IdOf(element));
+        main.Status.Message = Session.UndoName;
     }
 
     private void Delete()
@@ -94,14 +112,19 @@ public sealed class MainCommands(MainWindow main)
         if (refs.Count == 0)
         {
             if (Prompts.Ask(App, "Delete", $"Delete {ElementKinds.Label(kind)} {id}?", "Cancel", "Delete") == 1)
+            {
                 Session.Delete(kind, id);
+                main.Status.Message = Session.UndoName + " (Alt+Z undoes)";
+            }
             return;
         }
         string list = string.Join("\n", refs.Take(12).Select(r => "  " + r)) + (refs.Count > 12 ? $"\n  … and {refs.Count - 12} more" : "");
         int? answer = Prompts.Ask(App, "Bus in use",
             $"Bus {id} is named by {refs.Count} element(s):\n{list}\n\nDelete the bus with the elements connected to it?",
             "Cancel", "Delete all");
-        if (answer == 1) Session.Delete(kind, id, cascade: true);
+        if (answer != 1) return;
+        Session.Delete(kind, id, cascade: true);
+        main.Status.Message = Session.UndoName + " (Alt+Z undoes)";
     }
 
     private void Duplicate()
@@ -109,6 +132,19 @@ public sealed class MainCommands(MainWindow main)
         if (main.SelectedId is not { } id) return;
         string copy = Session.Duplicate(main.SelectedKind, id);
         main.Select(main.SelectedKind, copy);
+        main.Status.Message = Session.UndoName;
+    }
+
+    private void Undo()
+    {
+        string? what = Session.UndoName;
+        main.Status.Message = Session.Undo() ? $"undid: {what}" : "nothing to undo";
+    }
+
+    private void Redo()
+    {
+        string? what = Session.RedoName;
+        main.Status.Message = Session.Redo() ? $"redid: {what}" : "nothing to redo";
     }
 
     private void LoadFlow()
@@ -118,28 +154,48 @@ public sealed class MainCommands(MainWindow main)
         LoadFlowResult? warm = main.LastResult is { Converged: true } last && last.Scenario == scenario ? last : null;
         string? path = Session.Path;
         var request = new SolveRequest { Scenario = scenario, Options = LoadFlowOptions.Default with { WarmStart = warm } };
+        // The study runs on the snapshot: if the network is edited meanwhile, the result shows as out of date at once.
+        ResultStamp stamp = main.Now();
         main.Runner.Start("Load flow", cancel => StudyCase.Of(snapshot, path).Solve(request, cancel),
             result =>
             {
-                main.ShowResult(result);
+                main.ShowResult(result, stamp);
                 main.Results.Value = main.Results.BusesTab;
+                main.Status.Message = result.Converged ? null : "the load flow did not converge";
             },
             message =>
             {
-                main.Status.Summary = message;
+                main.Fail(ResultKind.LoadFlow, message);
                 Prompts.Tell(App, "Load flow", message);
             });
     }
 
     private void ChooseScenario()
     {
-        var names = new List<string> { "(network as entered)" };
+        var names = new List<string> { Labels.Scenario(null) + "  (no scaling)" };
         names.AddRange(Session.Network.Scenarios.Select(s => $"{s.Name}  load ×{Field.Format(s.LoadScale)}"));
         int current = Session.ActiveScenario is null ? 0
             : 1 + Session.Network.Scenarios.ToList().FindIndex(s => s.Name == Session.ActiveScenario);
         if (Prompts.Choose(App, "Scenario", names, current) is not int chosen) return;
         Session.ActiveScenario = chosen == 0 ? null : Session.Network.Scenarios[chosen - 1].Name;
         main.Refresh();
+        main.Status.Message = $"studies now run in {Labels.Scenario(Session.ActiveScenario)}";
+    }
+
+    /// <summary>Sorts the table in focus (or the shown tab's first) by a column chosen from its headings.</summary>
+    private void Sort()
+    {
+        ResultTable? table = main.Table.HasFocus ? main.Table : main.Results.CurrentTable();
+        if (table is null || table.Source.Columns == 0)
+        {
+            main.Status.Message = "no table to sort here";
+            return;
+        }
+        var items = new List<string> { "(the result's own order)" };
+        items.AddRange(table.Source.ColumnNames.Select((h, i) => i == table.SortColumn ? $"{h}  (sorted {(table.Descending ? "↓" : "↑")}: again reverses)" : h));
+        if (Prompts.Choose(App, "Sort by", items, table.SortColumn is int c ? c + 1 : 0) is not int chosen) return;
+        table.SortBy(chosen == 0 ? null : chosen - 1);
+        main.Status.Message = table.SortColumn is int col ? $"sorted by {table.Source.ColumnNames[col]} {(table.Descending ? "↓" : "↑")}" : "in the result's own order";
     }
 
     private void Open()
@@ -152,6 +208,7 @@ public sealed class MainCommands(MainWindow main)
             Session.Close();
             main.UseSession(next);
             StudyTui.OfferRecovery(App, next);
+            main.Status.Message = $"opened {next.Path}";
         }
         catch (InputException e)
         {
@@ -163,13 +220,31 @@ public sealed class MainCommands(MainWindow main)
     private bool Save()
     {
         if (Session.NeedsPathToSave) return SaveAs();
+        if (!ConfirmErrors()) return false;
         return Try(Session.Save);
     }
 
     private bool SaveAs()
     {
+        if (!ConfirmErrors()) return false;
         if (Prompts.AskPath(App, "Save as", Session.SuggestedSavePath) is not { } path) return false;
         return Try(() => Session.SaveAs(path));
+    }
+
+    /// <summary>
+    /// A network with errors may be saved (work in progress), but never without the user seeing them: the
+    /// same errors <c>study check</c> lists, and the choice to go back and fix them.
+    /// </summary>
+    private bool ConfirmErrors()
+    {
+        List<Problem> errors = NetworkCheck.Of(Session.Network).Report.Errors.ToList();
+        if (errors.Count == 0) return true;
+        string list = string.Join("\n", errors.Take(ListedErrors).Select(p => "  " + p.Describe()))
+            + (errors.Count > ListedErrors ? $"\n  … and {errors.Count - ListedErrors} more ('study check' lists them all)" : "");
+        int? answer = Prompts.Ask(App, "The network has errors",
+            $"{errors.Count} error(s): studies will refuse this network until they are fixed.\n{list}\n\nSave it anyway?",
+            "Save anyway", "Cancel");
+        return answer == 0;
     }
 
     private bool Try(Action write)
@@ -177,11 +252,13 @@ public sealed class MainCommands(MainWindow main)
         try
         {
             write();
+            main.Status.Message = $"saved {Session.Path}";
             return true;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or InputException)
         {
             Prompts.Tell(App, "Not saved", e.Message);
+            main.Status.Message = "not saved: " + e.Message;
             return false;
         }
     }

@@ -9,22 +9,25 @@ namespace Study.App.Tui.Shell;
 public static class Prompts
 {
     /// <summary>
-    /// Adds Cancel and Run to a study dialog and runs it. Run reads the fields into the form and keeps
-    /// the dialog open, with the form's message in <paramref name="status"/>, until the form is valid.
+    /// Adds Cancel and Run to a study dialog and runs it. Run (the button, or Enter from any field) reads
+    /// the fields into the form and keeps the dialog open, with the form's message in
+    /// <paramref name="status"/>, until the form is valid: a question is never dropped in silence.
     /// True when the user ran it with a valid form.
     /// </summary>
     public static bool RunStudyDialog(IApplication app, Dialog dialog, Label status, Action read, Func<string?> error, View? focus = null)
     {
         dialog.AddButton(new Button { Text = "Cancel" });
         var run = new Button { Text = "Run" };
-        run.Accepting += (_, e) =>
+        dialog.AddButton(run);
+        dialog.IsRunningChanging += (_, e) =>
         {
+            if (e.NewValue || dialog.Result != 1) return;
             read();
             if (error() is not { } message) return;
-            e.Handled = true;
-            status.Text = message;
+            e.Cancel = true;
+            dialog.Result = null;
+            status.Text = "Not run: " + message;
         };
-        dialog.AddButton(run);
         (focus ?? run).SetFocus();
         app.Run(dialog);
         read();

@@ -1,4 +1,4 @@
-// The last screen row: the last solve's summary (or the running study) and key hints.
+// The last screen row: the results' state (or the running study), the last action's outcome, and key hints.
 using Terminal.Gui.Drawing;
 using Terminal.Gui.ViewBase;
 
@@ -8,6 +8,7 @@ namespace Study.App.Tui.Shell;
 public sealed class StatusView : View
 {
     private string summary = "";
+    private string? message;
 
     public StatusView()
     {
@@ -27,11 +28,25 @@ public sealed class StatusView : View
         }
     }
 
+    /// <summary>What the last action did ("saved /path/net.study.json", "undid: add bus B4"); null for none.</summary>
+    public string? Message
+    {
+        get => message;
+        set
+        {
+            message = value;
+            SetNeedsDraw();
+        }
+    }
+
+    /// <summary>The whole line as drawn at a width.</summary>
+    public string Line(int width) => StatusLine.Compose(" " + summary, width, message);
+
     protected override bool OnDrawingContent(DrawContext? context)
     {
         SetAttributeForRole(VisualRole.Focus);
         Move(0, 0);
-        AddStr(StatusLine.Compose(" " + summary, Viewport.Width).PadRight(Viewport.Width));
+        AddStr(Line(Viewport.Width).PadRight(Viewport.Width));
         return true;
     }
 }

@@ -1,5 +1,6 @@
-// The study commands of the main screen: fault study, tap study, applying a recommended tap, outage screening.
+// The study commands of the main screen: faults, tap study and applying its tap, outages and one outage's detail, comparison.
 using Study.App.Reports;
+using Study.App.Tui.Compare;
 using Study.App.Tui.Editing;
 using Study.App.Tui.Faults;
 using Study.App.Tui.Outages;
@@ -13,11 +14,18 @@ using Terminal.Gui.App;
 
 namespace Study.App.Tui.Shell;
 
-/// <summary>Asks the question in a dialog, runs the engine through the runner, shows the result in its tab.</summary>
+/// <summary>
+/// Asks the question in a dialog, runs the engine through the runner on a snapshot of the network, and
+/// shows the result in its tab, stamped with the snapshot so that a later edit marks it out of date.
+/// A failure clears the tab's old result and says why.
+/// </summary>
 public sealed class StudyCommands(MainWindow main)
 {
     private IApplication App => main.App;
     private EditSession Session => main.Session;
+
+    /// <summary>How the last tap study was asked (the tapped winding, whether other taps were held), for its heading.</summary>
+    public TapSetting? LastTapSetting { get; private set; }
 
     public void Fault()
     {
@@ -26,38 +34,59 @@ public sealed class StudyCommands(MainWindow main)
         if (!FaultDialog.Run(App, form) || form.Build().Request is not { } request) return;
         Network snapshot = Session.Network;
         string? path = Session.Path;
-        request = request with { Scenario = Session.ActiveScenario };
+        ResultStamp stamp = main.Now();
+        // The screen gives what it can: three-phase levels even where earth faults lack data, with the gaps listed.
+        request = request with { Scenario = Session.ActiveScenario, LeaveOutEarthFaultsWithoutZeroSequence = true };
         main.Runner.Start("Fault study", cancel => StudyCase.Of(snapshot, path).Fault(request, cancel),
             result =>
             {
                 if (result.Failure is { } failure)
                 {
+                    main.Fail(ResultKind.Fault, "fault study not run: " + failure);
                     Prompts.Tell(App, "Fault study", "Fault study not run: " + failure + "\n\n" + FaultStudy.Caution);
                     return;
                 }
-                main.Results.FaultResult = result;
+                main.Results.Faults.Show(result, snapshot);
+                main.Stamp(ResultKind.Fault, stamp);
                 main.ShowStudyTab(main.Results.FaultsTab);
+                if (result.LeftOut.Count > 0)
+                    main.Status.Message = $"earth faults not calculated: {result.MissingZeroSequence.Count} element(s) lack zero-sequence data (listed in the Faults tab)";
             },
-            message => Prompts.Tell(App, "Fault study", message + "\n\n" + FaultStudy.Caution));
+            message =>
+            {
+                main.Fail(ResultKind.Fault, message);
+                Prompts.Tell(App, "Fault study", message + "\n\n" + FaultStudy.Caution);
+            });
     }
 
     public void TapStudy()
     {
         if (ChooseTransformer() is not { } id) return;
-        var form = new TapStudyForm(Session.Network, id, Session.ActiveScenario);
+        var form = new TapStudyForm(Session.Network, id, Session.ActiveScenario) { HoldOtherTaps = LastTapSetting?.HeldOtherTaps ?? false };
         if (!TapStudyDialog.Run(App, form) || form.Build().Request is not { } request) return;
         Network snapshot = Session.Network;
         double fraction = 0;
         var progress = new Progress<double>(f => fraction = f);
         string? path = Session.Path;
+        TapChanger? tap = TapOf(snapshot, id);
+        int positions = tap is null ? 0 : tap.Range.Highest - tap.Range.Lowest + 1;
+        int scenarios = request.Scenarios.Count > 0 ? request.Scenarios.Count : Math.Max(1, snapshot.Scenarios.Count);
+        // A study of every scenario does not depend on the one chosen; one of the active scenario does.
+        ResultStamp stamp = main.Now(scenarioMatters: request.Scenarios.Count > 0);
         main.Runner.Start("Tap study", cancel => StudyCase.Of(snapshot, path).Taps(request, progress, cancel),
             result =>
             {
-                main.Results.TapStudyResult = result;
+                LastTapSetting = new TapSetting(tap?.Winding ?? TapWinding.Hv, TapOf(Session.Network, id)?.Position, request.HoldOtherTaps);
+                main.Results.TapStudy.Show(result, LastTapSetting);
+                main.Stamp(ResultKind.Taps, stamp);
                 main.ShowStudyTab(main.Results.TapStudyTab);
             },
-            message => Prompts.Tell(App, "Tap study", message),
-            () => fraction);
+            message =>
+            {
+                main.Fail(ResultKind.Taps, message);
+                Prompts.Tell(App, "Tap study", message);
+            },
+            new ProgressMeter(() => fraction, positions * scenarios, "positions"));
     }
 
     /// <summary>Each line and transformer out in turn, in the active scenario or all of them, on a snapshot.</summary>
@@ -69,17 +98,74 @@ public sealed class StudyCommands(MainWindow main)
         double fraction = 0;
         var progress = new Progress<double>(f => fraction = f);
         string? path = Session.Path;
+        int outages = OutageElements.InService(snapshot).Count * (request.Scenarios.Count > 0 ? request.Scenarios.Count : Math.Max(1, snapshot.Scenarios.Count));
+        ResultStamp stamp = main.Now(scenarioMatters: request.Scenarios.Count > 0);
         main.Runner.Start("Outage screening", cancel => StudyCase.Of(snapshot, path).Outages(request, progress, cancel),
             result =>
             {
+                screened = snapshot;
                 main.Results.OutageResult = result;
+                main.Stamp(ResultKind.Outages, stamp);
                 main.ShowStudyTab(main.Results.OutagesTab);
             },
-            message => Prompts.Tell(App, "Outage screening", message),
-            () => fraction);
+            message =>
+            {
+                main.Fail(ResultKind.Outages, message);
+                Prompts.Tell(App, "Outage screening", message);
+            },
+            new ProgressMeter(() => fraction, outages, "outages"));
     }
 
-    /// <summary>Sets the studied transformer's tap to the best recommended position, as one undoable edit.</summary>
+    private Network? screened;
+
+    /// <summary>
+    /// Enter on an outage row: the load flow with that element out, solved on the network the screening
+    /// ran on (so it agrees with the row even after edits), shown with what the outage caused.
+    /// </summary>
+    public void OutageDetail(OutageCase outage)
+    {
+        if (screened is not { } network) return;
+        string? path = Session.Path;
+        var request = new SolveRequest { Scenario = outage.Scenario };
+        main.Runner.Start($"Outage of {outage.Element}", cancel => StudyCase.Of(network, path).SolveWithout(outage.Element, request, cancel),
+            after => OutageDetailDialog.Run(App, outage, after),
+            message => Prompts.Tell(App, $"Outage of {outage.Element}", message));
+    }
+
+    /// <summary>Before and after: two scenarios of this network, or another network file against this one.</summary>
+    public void Compare()
+    {
+        var form = new CompareForm(Session.Network, Session.ActiveScenario, Session.Path);
+        if (!CompareDialog.Run(App, form) || form.Build().Request is not { } request) return;
+        Network snapshot = Session.Network;
+        string? path = Session.Path;
+        string here = path is null ? "this network" : Path.GetFileName(path) + " as edited";
+        string beforeLabel = request.BeforePath is { } file ? $"{Path.GetFileName(file)}, {Labels.Scenario(request.BeforeScenario)}" : $"{here}, {Labels.Scenario(request.BeforeScenario)}";
+        string afterLabel = $"{here}, {Labels.Scenario(request.AfterScenario)}";
+        ResultStamp stamp = main.Now(scenarioMatters: false);
+        main.Runner.Start("Compare", cancel =>
+            {
+                StudyCase after = StudyCase.Of(snapshot, path);
+                StudyCase before = request.BeforePath is { } f ? StudyCase.Open(f) : after;
+                return StudyCase.Compare(before, request.BeforeScenario, after, request.AfterScenario, cancel: cancel);
+            },
+            result =>
+            {
+                main.Results.Comparison.Show(result, beforeLabel, afterLabel);
+                main.Stamp(ResultKind.Compare, stamp);
+                main.ShowStudyTab(main.Results.CompareTab);
+            },
+            message =>
+            {
+                main.Fail(ResultKind.Compare, message);
+                Prompts.Tell(App, "Compare", message);
+            });
+    }
+
+    /// <summary>
+    /// Sets the studied transformer's tap to the best recommended position, as one undoable edit. The tap
+    /// study stays current: it studied every position, so moving this tap does not change its answer.
+    /// </summary>
     public void ApplyRecommendedTap()
     {
         if (main.Results.TapStudyResult is not { } r)
@@ -93,22 +179,28 @@ public sealed class StudyCommands(MainWindow main)
             return;
         }
         int position = r.Recommended[0].Position;
-        if (CurrentPosition(r.Transformer) == position)
+        if (TapOf(Session.Network, r.Transformer)?.Position == position)
         {
             Prompts.Tell(App, "Apply tap", $"{r.Transformer} is already on position {Labels.Position(position)}.");
             return;
         }
+        ResultStamp? stamp = main.StampOf(ResultKind.Taps);
+        bool current = stamp?.WhyOutOfDate(Session.Network, Session.ActiveScenario) is null;
         if (!Session.SetTapPosition(r.Transformer, position))
         {
             Prompts.Tell(App, "Apply tap", $"Transformer {r.Transformer} is no longer in the network, or has no tap.");
             return;
         }
-        main.Status.Summary = $"{r.Transformer} tap set to {Labels.Position(position)} (Alt+Z undoes) · F5 re-solves";
+        if (current && stamp is not null)
+        {
+            stamp.AlsoHoldsFor(Session.Network);
+            main.Refresh();
+        }
+        main.Status.Message = $"{r.Transformer} tap set to {Labels.Position(position)} (Alt+Z undoes) · F5 re-solves";
     }
 
-    private int? CurrentPosition(string id) =>
-        Session.Network.Transformers.FirstOrDefault(t => t.Id == id)?.Tap?.Position
-        ?? Session.Network.ThreeWindingTransformers.FirstOrDefault(t => t.Id == id)?.Tap?.Position;
+    private static TapChanger? TapOf(Network n, string id) =>
+        n.Transformers.FirstOrDefault(t => t.Id == id)?.Tap ?? n.ThreeWindingTransformers.FirstOrDefault(t => t.Id == id)?.Tap;
 
     /// <summary>The selected transformer when it has a tap; otherwise a choice among those that do.</summary>
     private string? ChooseTransformer()

@@ -10,8 +10,8 @@ public enum TuiAction
 {
     Open, Save, SaveAs, Quit,
     Add, Edit, Delete, Duplicate, Undo, Redo,
-    LoadFlow, Fault, TapStudy, ApplyTap, Outages, Scenario, Cancel,
-    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, EnlargeResults,
+    LoadFlow, Fault, TapStudy, ApplyTap, Outages, Compare, Scenario, Cancel,
+    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, ShowCompare, EnlargeResults, Sort,
     Help,
 }
 
@@ -26,32 +26,35 @@ public static class TuiCommands
 {
     public static IReadOnlyList<TuiCommand> All { get; } =
     [
-        new(TuiAction.Open, "File", "_Open…", "Open a network file or an IEEE Common Format case", Key.F3, Key.O.WithAlt),
-        new(TuiAction.Save, "File", "_Save", "Save to the network file (asks for a name when it has none)", Key.F2),
+        new(TuiAction.Open, "File", "_Open…", "A network file or an IEEE Common Format case", Key.F3, Key.O.WithAlt),
+        new(TuiAction.Save, "File", "_Save", "Save to the network file (or ask for a name)", Key.F2),
         new(TuiAction.SaveAs, "File", "Save _As…", "Save under a new name", Key.A.WithAlt),
         new(TuiAction.Quit, "File", "_Quit", "Quit (asks about unsaved changes)", Key.Q.WithAlt, Key.Q.WithCtrl),
         new(TuiAction.Add, "Edit", "_Add…", "Add an element of the selected kind", Key.InsertChar),
-        new(TuiAction.Edit, "Edit", "_Edit…", "Edit the selected element (also Enter in the table)", Key.F4),
+        new(TuiAction.Edit, "Edit", "_Edit…", "Edit the selected element (Enter in the table)", Key.F4),
         new(TuiAction.Delete, "Edit", "_Delete…", "Delete the selected element", Key.DeleteChar),
         new(TuiAction.Duplicate, "Edit", "D_uplicate", "Copy the selected element under a new id", Key.D.WithAlt),
         new(TuiAction.Undo, "Edit", "Und_o", "Undo the last edit", Key.Z.WithAlt, Key.Z.WithCtrl),
         new(TuiAction.Redo, "Edit", "_Redo", "Redo the last undone edit", Key.Y.WithAlt, Key.Y.WithCtrl),
         new(TuiAction.LoadFlow, "Study", "_Load flow", "Solve the load flow in the active scenario", Key.F5),
         new(TuiAction.Fault, "Study", "_Fault…", "Fault at a bus or at all buses", Key.F7),
-        new(TuiAction.TapStudy, "Study", "_Tap study…", "Every tap position of a transformer in every scenario", Key.F8),
-        new(TuiAction.ApplyTap, "Study", "_Apply recommended tap", "Set the studied transformer to the best position of the last tap study (undoable)", Key.P.WithAlt),
-        new(TuiAction.Outages, "Study", "_Outage screening…", "Each line and transformer out in turn, ranked by severity", Key.U.WithAlt),
-        new(TuiAction.Scenario, "Study", "_Scenario…", "Choose the scenario studies run in", Key.N.WithAlt),
+        new(TuiAction.TapStudy, "Study", "_Tap study…", "Every tap position, in each scenario", Key.F8),
+        new(TuiAction.ApplyTap, "Study", "_Apply recommended tap", "Set the best position of the last tap study", Key.P.WithAlt),
+        new(TuiAction.Outages, "Study", "_Outage screening…", "Each line and transformer out in turn, ranked", Key.U.WithAlt),
+        new(TuiAction.Compare, "Study", "Co_mpare…", "Two scenarios, or the file before a change", Key.C.WithAlt),
+        new(TuiAction.Scenario, "Study", "_Scenario…", "The scenario studies run in (kept per file)", Key.N.WithAlt),
         new(TuiAction.Cancel, "Study", "_Cancel study", "Stop the study that is running", Key.Esc),
-        new(TuiAction.ShowDetail, "View", "_Detail", "Selected element: fields, problems, per-unit values", Key.D1.WithAlt),
-        new(TuiAction.ShowBuses, "View", "_Results: buses", "Bus voltages of the last load flow", Key.D2.WithAlt),
-        new(TuiAction.ShowBranches, "View", "Results: _branches", "Branch flows, loading and losses", Key.D3.WithAlt),
-        new(TuiAction.ShowFaults, "View", "_Faults", "Fault levels", Key.D4.WithAlt),
-        new(TuiAction.ShowTapStudy, "View", "_Tap study", "Tap-study results", Key.D5.WithAlt),
+        new(TuiAction.ShowDetail, "View", "_Detail", "Selected element: fields, problems, per unit", Key.D1.WithAlt),
+        new(TuiAction.ShowBuses, "View", "_Buses", "Bus voltages of the last load flow", Key.D2.WithAlt),
+        new(TuiAction.ShowBranches, "View", "B_ranches", "Branch flows, loading and losses", Key.D3.WithAlt),
+        new(TuiAction.ShowFaults, "View", "_Faults", "Fault levels and breaker duty", Key.D4.WithAlt),
+        new(TuiAction.ShowTapStudy, "View", "_Taps", "Tap-study results and curve", Key.D5.WithAlt),
         new(TuiAction.ShowOneLine, "View", "_One-line", "Text one-line view of the network", Key.D6.WithAlt),
-        new(TuiAction.ShowVoltageChart, "View", "_Voltage chart", "Bar chart of bus voltages against the band", Key.D7.WithAlt),
+        new(TuiAction.ShowVoltageChart, "View", "_Chart", "Bus voltages against the band", Key.D7.WithAlt),
         new(TuiAction.ShowOutages, "View", "O_utages", "Outage-screening results", Key.D8.WithAlt),
-        new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Give the results the whole right side, or give the table back", Key.R.WithAlt),
+        new(TuiAction.ShowCompare, "View", "Co_mpare", "Before/after comparison", Key.D9.WithAlt),
+        new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Results take the screen, or give the table back", Key.R.WithAlt),
+        new(TuiAction.Sort, "View", "_Sort table…", "Sort the table by a column (again: reverse)", Key.F9),
         new(TuiAction.Help, "Help", "_Keys", "This list of keys", Key.F1),
     ];
 
@@ -64,10 +67,11 @@ public static class TuiCommands
     /// <summary>Keys that are not commands of our own but that a user needs, for the help screen.</summary>
     public static IReadOnlyList<(string Keys, string Help)> Navigation { get; } =
     [
-        ("Tab, Shift+Tab", "Move between the element list, the table and the results"),
-        ("Arrows, PgUp, PgDn", "Move in a list or table"),
-        ("Enter", "Edit the selected element; in a form, accept"),
-        ("Esc", "In a form or dialog, cancel; on the main screen, stop a running study"),
+        ("Tab, Shift+Tab", "Move between the element list, the table and the results (and the tables of a result)"),
+        ("Arrows, PgUp, PgDn", "Move in a list or table (they never leave it)"),
+        ("Enter", "Edit the selected element; on an outage, open it; in a form, accept"),
+        ("F4, Alt+Down", "In a form: list the values of the field (buses, choices) to pick from"),
+        ("Esc", "In a form or dialog, cancel (asks when fields changed); on the main screen, stop a running study"),
         ("Alt+F, Alt+E, Alt+S, Alt+V, Alt+H", "Open the File, Edit, Study, View or Help menu"),
     ];
 }

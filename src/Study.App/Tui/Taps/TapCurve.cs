@@ -45,8 +45,31 @@ public sealed record TapCurve(int MinPosition, int MaxPosition, double BandLowPu
         return curve with { Series = series };
     }
 
-    /// <summary>The legend line under the chart, e.g. "● winter-peak  ○ summer-night  ┄ band 0.95–1.05 pu".</summary>
+    /// <summary>The legend under the chart, e.g. "● winter-peak  ○ summer-night: lowest and highest watched bus · ┄ band 0.95–1.05 pu".</summary>
     public string Legend() =>
         string.Join("  ", Series.Select(s => $"{s.Glyph} {s.Scenario}"))
-        + $"  ┄ band {Field.Format(Math.Round(BandLowPu, 4))}–{Field.Format(Math.Round(BandHighPu, 4))} pu  (lowest and highest watched bus)";
+        + $": lowest and highest watched bus at each position · ┄ band {Field.Format(Math.Round(BandLowPu, 4))}–{Field.Format(Math.Round(BandHighPu, 4))} pu";
+
+    /// <summary>Tick steps the voltage axis may use: round numbers of pu.</summary>
+    private static readonly double[] Steps = [0.001, 0.002, 0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1];
+
+    /// <summary>
+    /// The voltage axis for <paramref name="rows"/> rows: the bottom at a multiple of a round step, a tick
+    /// every step, and a whole number of rows (two at least, so labels never crowd) between ticks. The
+    /// smallest step whose ticks fit is taken, so the axis says as much as the rows allow.
+    /// </summary>
+    public (double Origin, double Step, int RowsPerTick) VoltageAxis(int rows)
+    {
+        rows = Math.Max(1, rows);
+        // Three rows per tick where the rows allow it (labels apart), then two; on a very short chart one will do.
+        foreach (int least in new[] { 3, 2, 1 })
+            foreach (double step in Steps)
+            {
+                double origin = Math.Floor(YLowPu / step + 1e-9) * step;
+                int ticks = Math.Max(1, (int)Math.Ceiling((YHighPu - origin) / step - 1e-9));
+                int perTick = rows / ticks;
+                if (perTick >= least) return (origin, step, perTick);
+            }
+        return (Math.Floor(YLowPu), 1, rows);
+    }
 }

@@ -13,6 +13,7 @@ public sealed class TapCurveView : GraphView
 {
     private static readonly ColorName16[] Colours = [ColorName16.BrightYellow, ColorName16.BrightCyan, ColorName16.BrightGreen, ColorName16.BrightMagenta];
     private TapCurve? curve;
+    private int yDecimals = 3;
 
     public TapCurveView()
     {
@@ -73,7 +74,7 @@ public sealed class TapCurveView : GraphView
             return position < curve.MinPosition || position > curve.MaxPosition ? "" : Labels.Position(position);
         };
         AxisX.Text = "tap position";
-        AxisY.LabelGetter = i => i.Value.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
+        AxisY.LabelGetter = i => Math.Round(i.Value, 4).ToString("F" + yDecimals, System.Globalization.CultureInfo.InvariantCulture);
         AxisY.Text = "pu";
         SetNeedsDraw();
     }
@@ -85,15 +86,17 @@ public sealed class TapCurveView : GraphView
         int cols = Math.Max(4, Viewport.Width - (int)MarginLeft - 1);
         int rows = Math.Max(3, Viewport.Height - (int)MarginBottom);
         float xPerCell = (float)curve.XSpan / cols;
-        float yPerCell = (float)(curve.YHighPu - curve.YLowPu) / rows;
+        (double origin, double step, int rowsPerTick) = curve.VoltageAxis(rows);
+        float yPerCell = (float)(step / rowsPerTick);
         CellSize = new System.Drawing.PointF(xPerCell, yPerCell);
-        ScrollOffset = new System.Drawing.PointF(0, (float)curve.YLowPu);
+        ScrollOffset = new System.Drawing.PointF(0, (float)origin);
         int positions = curve.MaxPosition - curve.MinPosition + 1;
         // A label every few positions so that signed labels (up to 3 characters) do not run together.
         int every = Math.Max(1, (int)Math.Ceiling(4 * xPerCell));
         AxisX.Increment = 1;
         AxisX.ShowLabelsEvery = (uint)(positions <= 1 ? 1 : every);
-        AxisY.Increment = yPerCell * 2;
+        AxisY.Increment = (float)step;
         AxisY.ShowLabelsEvery = 1;
+        yDecimals = step >= 1 ? 0 : step >= 0.1 ? 1 : step >= 0.01 ? 2 : 3;
     }
 }

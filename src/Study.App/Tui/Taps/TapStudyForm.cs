@@ -1,5 +1,6 @@
 // What the tap-study dialog asks, as plain texts, and the engine request they make.
 using System.Globalization;
+using Study.App.Reports;
 using Study.App.Tui.Editing;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -20,7 +21,10 @@ public sealed class TapStudyForm(Network network, string transformerId, string? 
     /// <summary>True: every scenario of the network; false: the active scenario only.</summary>
     public bool AllScenarios { get; set; } = true;
 
-    public string ActiveScenarioLabel => activeScenario ?? "loads as entered";
+    /// <summary>True: the other on-load tap changers stay at their positions while this one moves.</summary>
+    public bool HoldOtherTaps { get; set; }
+
+    public string ActiveScenarioLabel => Labels.Scenario(activeScenario);
 
     /// <summary>The request, or the reason the texts do not make one.</summary>
     public (TapStudyRequest? Request, string? Error) Build()
@@ -38,7 +42,10 @@ public sealed class TapStudyForm(Network network, string transformerId, string? 
             if (network.FindBus(bus) is null) return (null, $"watched bus {bus} is not in the network");
         // Empty means every scenario; a null name is the loads as entered.
         IReadOnlyList<string?> scenarios = AllScenarios ? [] : [activeScenario];
-        var request = new TapStudyRequest { TransformerId = TransformerId, WatchBuses = watch, Band = band, Scenarios = scenarios };
+        var request = new TapStudyRequest
+        {
+            TransformerId = TransformerId, WatchBuses = watch, Band = band, Scenarios = scenarios, HoldOtherTaps = HoldOtherTaps,
+        };
         try
         {
             request.Validate();

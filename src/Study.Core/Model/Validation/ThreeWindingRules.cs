@@ -40,6 +40,7 @@ internal static class ThreeWindingRules
         Plausibility.Percent(at, "zMlPercent", t.ZMlPercent);
         if (finite) StarBranches(at, t, context.Network.BaseMva);
 
+        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: true);
         EarthingRules.Check(at, "hvNeutral", t.HvNeutral);
         EarthingRules.Check(at, "mvNeutral", t.MvNeutral);
         EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
@@ -47,7 +48,6 @@ internal static class ThreeWindingRules
             at.Error("mvaHv", "mvaHv is 0: noLoad is stated on the hv rating, so give mvaHv in MVA");
         TransformerRules.CheckNoLoad(at, t.NoLoad, t.MvaHv);
         TapRules.Check(at, t.Tap, hasMvWinding: true);
-        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: true);
     }
 
     /// <summary>A pairwise short-circuit impedance is measured between two windings: always above 0.</summary>

@@ -31,11 +31,11 @@ internal static class TransformerRules
         at.NotNegative("ratingMva", t.RatingMva, "a thermal rating (MVA)");
         at.Positive("xr", t.Xr, "the X/R ratio");
         at.Positive("z0Percent", t.Z0Percent, "the zero-sequence impedance (percent)");
+        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: false);
         EarthingRules.Check(at, "hvNeutral", t.HvNeutral);
         EarthingRules.Check(at, "lvNeutral", t.LvNeutral);
         if (form == nameplate) CheckNoLoad(at, t.NoLoad, t.Mva);
         TapRules.Check(at, t.Tap, hasMvWinding: false);
-        VectorGroupRules.Check(at, t.VectorGroup, t.Id, threeWinding: false);
     }
 
     /// <summary>

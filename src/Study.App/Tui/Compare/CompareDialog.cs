@@ -1,0 +1,50 @@
+// The comparison question as a dialog: two scenarios of this network, or a before file against this network.
+using Study.App.Tui.Shell;
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace Study.App.Tui.Compare;
+
+/// <summary>Fills a <see cref="CompareForm"/>. Enter runs, Esc cancels.</summary>
+public static class CompareDialog
+{
+    public static bool Run(IApplication app, CompareForm form)
+    {
+        var dialog = new Dialog { Title = "Compare before and after", Width = Dim.Percent(90), Height = 19 };
+        string[] scenarioLabels = form.Scenarios.Select(CompareForm.ScenarioLabel).ToArray();
+        var modeLabel = new Label { X = 0, Y = 0, Text = "Before" };
+        var mode = new OptionSelector
+        {
+            X = 12, Y = 0, Width = Dim.Fill(),
+            Labels = ["this network in another scenario", "another network file (the network before the change)"],
+            Value = form.BeforeIsFile ? 1 : 0,
+        };
+        var beforeLabel = new Label { X = 0, Y = 3, Text = "scenario" };
+        var before = new OptionSelector
+        {
+            X = 12, Y = 3, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
+            Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.BeforeScenario)),
+        };
+        var fileLabel = new Label { X = 0, Y = 5, Text = "file" };
+        var file = new TextField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
+        var afterLabel = new Label { X = 0, Y = 7, Text = "After" };
+        var afterWhat = new Label { X = 12, Y = 7, Text = "this network as edited, in scenario" };
+        var after = new OptionSelector
+        {
+            X = 12, Y = 8, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
+            Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.AfterScenario)),
+        };
+        var hint = new Label { X = 0, Y = 10, Width = Dim.Fill(), Text = "A before file is solved in the after scenario; both cases are solved alike and matched by id." };
+        var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels" };
+        dialog.Add(modeLabel, mode, beforeLabel, before, fileLabel, file, afterLabel, afterWhat, after, hint, status);
+        void Read()
+        {
+            form.BeforeIsFile = mode.Value == 1;
+            form.BeforeScenario = form.Scenarios[Math.Clamp(before.Value ?? 0, 0, form.Scenarios.Count - 1)];
+            form.AfterScenario = form.Scenarios[Math.Clamp(after.Value ?? 0, 0, form.Scenarios.Count - 1)];
+            form.BeforePath = file.Text;
+        }
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
+    }
+}
