@@ -4,6 +4,8 @@ using Study.App.Tui.Compare;
 using Study.App.Tui.Faults;
 using Study.App.Tui.LoadFlow;
 using Study.App.Tui.Outages;
+using Study.App.Tui.Profile;
+using Study.App.Tui.Start;
 using Study.App.Tui.Taps;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
@@ -67,6 +69,8 @@ public sealed class ResultsView : FrameView
     private readonly OneLineView oneLine = new();
     private readonly OutageView outages = new();
     private readonly CompareView compare = new();
+    private readonly StartView start = new();
+    private readonly ProfileView profile = new();
     private ResultTab current;
     private LoadFlowResult? result;
 
@@ -87,6 +91,8 @@ public sealed class ResultsView : FrameView
         ChartTab = Tab("Chart", chart);
         OutagesTab = Tab("Outages", outages);
         CompareTab = Tab("Compare", compare);
+        StartTab = Tab("Start", start);
+        ProfileTab = Tab("Profile", profile);
         strip.Titles = tabs.Select(t => t.Title).ToList();
         current = tabs[0];
         Show(current);
@@ -105,6 +111,8 @@ public sealed class ResultsView : FrameView
     public ResultTab ChartTab { get; }
     public ResultTab OutagesTab { get; }
     public ResultTab CompareTab { get; }
+    public ResultTab StartTab { get; }
+    public ResultTab ProfileTab { get; }
 
     public IReadOnlyList<ResultTab> Tabs => tabs;
 
@@ -161,6 +169,10 @@ public sealed class ResultsView : FrameView
     }
 
     public CompareView Comparison => compare;
+
+    public StartView Start => start;
+
+    public ProfileView Profile => profile;
 
     public IReadOnlyList<OneLineRow> OneLine
     {
