@@ -78,6 +78,7 @@ public sealed class MainCommands
             case TuiAction.Compare: Studies.Compare(); break;
             case TuiAction.MotorStart: Start.StartStudy.Run(main); break;
             case TuiAction.Profile: Profile.ProfileStudy.Run(main); break;
+            case TuiAction.BankChoice: Choice.ChoiceStudy.Run(main); break;
             case TuiAction.Scenario: ChooseScenario(); break;
             case TuiAction.Cancel: main.Runner.Cancel(); break;
             case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
@@ -91,6 +92,8 @@ public sealed class MainCommands
             case TuiAction.ShowCompare: main.Results.Value = main.Results.CompareTab; break;
             case TuiAction.ShowStart: main.Results.Value = main.Results.StartTab; break;
             case TuiAction.ShowProfile: main.Results.Value = main.Results.ProfileTab; break;
+            case TuiAction.ShowBankChoice: main.Results.Value = main.Results.BankChoiceTab; break;
+            case TuiAction.SwitchCostAxis: main.Results.BankChoice.SwitchAxis(); break;
             case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
             case TuiAction.Sort: Sort(); break;
             case TuiAction.Help: HelpDialog.Run(App); break;

@@ -144,6 +144,7 @@ public sealed class MainWindow : Window
         Results.Comparison.Show(null);
         Results.Start.Result = null;
         Results.Profile.Show(null);
+        Results.BankChoice.Show(null);
         stamps.Clear();
         failures.Clear();
         Refresh();
@@ -196,6 +197,7 @@ public sealed class MainWindow : Window
             case ResultKind.Compare: Results.Comparison.Show(null); break;
             case ResultKind.Start: Results.Start.Result = null; break;
             case ResultKind.Profile: Results.Profile.Show(null); break;
+            case ResultKind.BankChoice: Results.BankChoice.Show(null); break;
         }
         stamps.Remove(what);
         failures[what] = message;
@@ -279,6 +281,7 @@ public sealed class MainWindow : Window
         Set(ResultKind.Compare, "comparison", "Alt+C", false, Results.CompareTab);
         Set(ResultKind.Start, "motor start", "Alt+M", false, Results.StartTab);
         Set(ResultKind.Profile, "profile", "Alt+L", false, Results.ProfileTab);
+        Set(ResultKind.BankChoice, "bank choice", "Alt+B", false, Results.BankChoiceTab);
     }
 
     /// <summary>The one-line view shows the network as edited, with the last solve's values only while they are of this network.</summary>

@@ -1,5 +1,6 @@
 // The detail/result pane: a strip of tab names, then the shown tab (its notice on top, its content below).
 using Study.App.Reports;
+using Study.App.Tui.Choice;
 using Study.App.Tui.Compare;
 using Study.App.Tui.Faults;
 using Study.App.Tui.LoadFlow;
@@ -71,6 +72,7 @@ public sealed class ResultsView : FrameView
     private readonly CompareView compare = new();
     private readonly StartView start = new();
     private readonly ProfileView profile = new();
+    private readonly ChoiceView bankChoice = new();
     private ResultTab current;
     private LoadFlowResult? result;
 
@@ -93,6 +95,7 @@ public sealed class ResultsView : FrameView
         CompareTab = Tab("Compare", compare);
         StartTab = Tab("Start", start);
         ProfileTab = Tab("Profile", profile);
+        BankChoiceTab = Tab("Bank", bankChoice);
         strip.Titles = tabs.Select(t => t.Title).ToList();
         current = tabs[0];
         Show(current);
@@ -113,6 +116,7 @@ public sealed class ResultsView : FrameView
     public ResultTab CompareTab { get; }
     public ResultTab StartTab { get; }
     public ResultTab ProfileTab { get; }
+    public ResultTab BankChoiceTab { get; }
 
     public IReadOnlyList<ResultTab> Tabs => tabs;
 
@@ -173,6 +177,8 @@ public sealed class ResultsView : FrameView
     public StartView Start => start;
 
     public ProfileView Profile => profile;
+
+    public ChoiceView BankChoice => bankChoice;
 
     public IReadOnlyList<OneLineRow> OneLine
     {

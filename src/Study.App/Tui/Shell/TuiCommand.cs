@@ -11,7 +11,7 @@ public enum TuiAction
     Open, Save, SaveAs, Quit,
     Add, Edit, Delete, Duplicate, Undo, Redo,
     LoadFlow, Fault, TapStudy, ApplyTap, Outages, Compare, MotorStart, Profile, BankChoice, Scenario, Cancel,
-    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, ShowCompare, ShowStart, ShowProfile, ShowBankChoice, EnlargeResults, Sort,
+    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, ShowCompare, ShowStart, ShowProfile, ShowBankChoice, SwitchCostAxis, EnlargeResults, Sort,
     Help,
 }
 
@@ -59,6 +59,7 @@ public static class TuiCommands
         new(TuiAction.ShowStart, "View", "Motor s_tart", "Motor-start dips and terminal voltages", Key.D0.WithAlt),
         new(TuiAction.ShowProfile, "View", "_Profile", "Profile chart over time and the energy table", Key.F11),
         new(TuiAction.ShowBankChoice, "View", "Ban_k choice", "Candidate banks, their binding constraint and the cost chart", Key.F12),
+        new(TuiAction.SwitchCostAxis, "View", "Bank chart a_xis", "Bank-choice chart: max breaker duty or voltage margin", Key.X.WithAlt),
         new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Results take the screen, or give the table back", Key.R.WithAlt),
         new(TuiAction.Sort, "View", "_Sort table…", "Sort the table by a column (again: reverse)", Key.F9),
         new(TuiAction.Help, "Help", "_Keys", "This list of keys", Key.F1),
