@@ -21,24 +21,24 @@ public static class StartDialog
     {
         var dialog = new Dialog { Title = "Motor start", Width = Dim.Percent(90), Height = Dim.Percent(90) };
         var motorsLabel = new Label { X = 0, Y = 0, Text = "Start together (Space ticks):" };
-        var motors = new ListView { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(9), ShowMarks = true, MarkMultiple = true };
+        var motors = new ListView { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(10), ShowMarks = true, MarkMultiple = true };
         motors.SetSource(new System.Collections.ObjectModel.ObservableCollection<string>(form.Motors.Select(StartForm.Describe)));
         for (int i = 0; i < form.Motors.Count; i++)
             if (form.Chosen.Contains(form.Motors[i].Id)) motors.Source?.SetMark(i, true);
         if (form.Motors.Count > 0) motors.SelectedItem = 0;
-        var minLabel = new Label { X = 0, Y = Pos.AnchorEnd(8), Text = "Min terminal pu" };
-        var min = new TextField { X = 17, Y = Pos.AnchorEnd(8), Width = 8, Text = form.MinTerminalText };
-        var minHint = new Label { X = 26, Y = Pos.AnchorEnd(8), Width = Dim.Fill(), Text = "blank: 0.80" };
-        var watchLabel = new Label { X = 0, Y = Pos.AnchorEnd(7), Text = "Watch buses" };
-        var watch = new TextField { X = 17, Y = Pos.AnchorEnd(7), Width = Dim.Fill(), Text = form.WatchText };
-        var scenLabel = new Label { X = 0, Y = Pos.AnchorEnd(6), Text = "Scenario" };
+        var minLabel = new Label { X = 0, Y = Pos.AnchorEnd(9), Text = "Min terminal pu" };
+        var min = new TextField { X = 17, Y = Pos.AnchorEnd(9), Width = 8, Text = form.MinTerminalText };
+        var minHint = new Label { X = 26, Y = Pos.AnchorEnd(9), Width = Dim.Fill(), Text = "blank: 0.80" };
+        var watchLabel = new Label { X = 0, Y = Pos.AnchorEnd(8), Text = "Watch buses" };
+        var watch = new TextField { X = 17, Y = Pos.AnchorEnd(8), Width = Dim.Fill(), Text = form.WatchText };
+        var scenLabel = new Label { X = 0, Y = Pos.AnchorEnd(7), Text = "Scenario" };
         var scenario = new OptionSelector
         {
-            X = 17, Y = Pos.AnchorEnd(6), Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            X = 17, Y = Pos.AnchorEnd(7), Width = Dim.Fill(), Orientation = Orientation.Horizontal,
             Labels = form.ScenarioChoices.Select(Labels.Scenario).ToList(),
             Value = Math.Max(0, form.ScenarioChoices.ToList().IndexOf(form.Scenario)),
         };
-        var caution = new TextPane { X = 0, Y = Pos.AnchorEnd(5), Height = 3, CanFocus = false, Content = "Caution: " + Study.Core.Faults.FaultStudy.Caution };
+        var caution = new TextPane { X = 0, Y = Pos.AnchorEnd(6), Height = 4, CanFocus = false, Content = "Caution: " + Study.Core.Faults.FaultStudy.Caution };
         status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
         dialog.Add(motorsLabel, motors, minLabel, min, minHint, watchLabel, watch, scenLabel, scenario, caution, status);
         read = () =>
