@@ -11,10 +11,12 @@ public sealed record TimeSeries(string Name, char Glyph, IReadOnlyList<(float X,
 /// <summary>
 /// What a profile chart draws. A long profile has more steps than the chart has columns, so the steps are
 /// gathered into at most <see cref="Intervals"/> intervals and each series draws its lowest and highest
-/// value in each: a short excursion still shows. Steps that did not converge are left out.
+/// value in each: a short excursion still shows. Steps that did not converge are left out. The chart draws
+/// its time axis at value 0, so values are drawn less <see cref="YShift"/> (the bottom of a tap chart,
+/// whose positions may all be negative) and the labels add it back.
 /// </summary>
 public sealed record TimeChart(string Unit, double YLow, double YHigh, double Hours, DateTimeOffset? Start, IReadOnlyList<TimeSeries> Series,
-    double? BandLow = null, double? BandHigh = null, bool Whole = false)
+    double? BandLow = null, double? BandHigh = null, bool Whole = false, double YShift = 0)
 {
     public const int Intervals = 240;
     private const string Glyphs = "●○◆◇■□▲△";
@@ -38,7 +40,8 @@ public sealed record TimeChart(string Unit, double YLow, double YHigh, double Ho
         var series = s.Taps.Select((tap, t) => (tap, t)).Where(x => onLoad.Contains(x.tap))
             .Select((x, k) => Gather(s, x.tap, Glyphs[k % Glyphs.Length], step => s.Positions[step][x.t])).ToList();
         (double lo, double hi) = Range(series, null, null);
-        return new TimeChart("position", Math.Floor(lo) - 1, Math.Ceiling(hi) + 1, r.Hours, s.Times.FirstOrDefault(), series, Whole: true);
+        double bottom = Math.Floor(lo) - 1;
+        return new TimeChart("position", bottom, Math.Ceiling(hi) + 1, r.Hours, s.Times.FirstOrDefault(), series, Whole: true, YShift: bottom);
     }
 
     /// <summary>"● CQ11  ○ PS11: lowest and highest in each interval · ┄ band 0.95–1.05 pu".</summary>

@@ -56,7 +56,7 @@ public sealed class TimeChartView : GraphView
             if (v is double y)
                 Annotations.Add(new PathAnnotation
                 {
-                    Points = [new System.Drawing.PointF(0, (float)y), new System.Drawing.PointF((float)chart.Hours, (float)y)],
+                    Points = [new System.Drawing.PointF(0, (float)(y - chart.YShift)), new System.Drawing.PointF((float)chart.Hours, (float)(y - chart.YShift))],
                     LineColor = band, LineRune = new Rune('┄'), BeforeSeries = true,
                 });
         for (int s = 0; s < chart.Series.Count; s++)
@@ -64,10 +64,10 @@ public sealed class TimeChartView : GraphView
             TimeSeries series = chart.Series[s];
             var fill = new GraphCellToRender(new Rune(series.Glyph), new Attr(Colours[s % Colours.Length], normal.Background));
             foreach (var line in new[] { series.Lowest, series.Highest })
-                Series.Add(new ScatterSeries { Points = line.Select(p => new System.Drawing.PointF(p.X, p.Y)).ToList(), Fill = fill });
+                Series.Add(new ScatterSeries { Points = line.Select(p => new System.Drawing.PointF(p.X, (float)(p.Y - chart.YShift))).ToList(), Fill = fill });
         }
         AxisX.LabelGetter = i => i.Value < -1e-6 || i.Value > chart.Hours + 1e-6 ? "" : chart.TimeLabel(i.Value);
-        AxisY.LabelGetter = i => Math.Round(i.Value, 4).ToString("F" + yDecimals, CultureInfo.InvariantCulture);
+        AxisY.LabelGetter = i => Math.Round(i.Value + chart.YShift, 4).ToString("F" + yDecimals, CultureInfo.InvariantCulture);
         AxisY.Text = chart.Unit;
         SetNeedsDraw();
     }
@@ -81,7 +81,7 @@ public sealed class TimeChartView : GraphView
         float xPerCell = (float)(Math.Max(chart.Hours, 1e-6) / cols);
         (double origin, double step, int rowsPerTick) = chart.ValueAxis(rows);
         CellSize = new System.Drawing.PointF(xPerCell, (float)(step / rowsPerTick));
-        ScrollOffset = new System.Drawing.PointF(0, (float)origin);
+        ScrollOffset = new System.Drawing.PointF(0, (float)(origin - chart.YShift));
         AxisX.Increment = (float)chart.TimeStep(cols, chart.TimeLabel(0).Length);
         AxisX.ShowLabelsEvery = 1;
         AxisY.Increment = (float)step;
