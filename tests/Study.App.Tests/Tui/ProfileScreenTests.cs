@@ -66,6 +66,9 @@ public sealed class ProfileScreenTests : IDisposable
         Assert.Equal(r.Buses.Where(b => r.Series.WatchedBuses.Contains(b.Id)).Max(b => b.BandLowPu), v.BandLow);
         TimeChart t = TimeChart.Taps(r);
         Assert.Equal(r.Transformers.Where(x => x.OnLoad).Select(x => x.Id), t.Series.Select(s => s.Name));
+        // Tap positions are drawn from the chart's bottom (the time axis sits at zero): every one at or above it.
+        Assert.Equal(t.YLow, t.YShift);
+        Assert.All(t.Series.SelectMany(x => x.Lowest), p => Assert.True(p.Y - t.YShift >= 0));
         Assert.Equal("00:00", v.TimeLabel(0));
         Assert.Equal("06:00", v.TimeLabel(6));
     }
