@@ -71,6 +71,19 @@ public static class FaultColumns
         ? Levels(true).Select("bus", "type", "ikPu", "skMva", "xOverR", "kappa", "ipPu", "earthCurrentPu", "Z1", "Z0")
         : Levels(false).Select("bus", "type", "ikKa", "skMva", "xOverR", "kappa", "ipKa", "earthCurrentKa", "kv", "Z1", "Z0");
 
+    /// <summary>
+    /// The Faults tab's one row per fault: the currents switchgear is rated against first (I''k, I_b, i_DC,
+    /// I_b,asym, I_k, I_th, i_p), then the level's other columns, so a narrow screen shows the duty currents.
+    /// </summary>
+    public static ColumnSpec<ShortCircuitLevel> ScreenFaults(bool perUnitOnly)
+    {
+        string k = perUnitOnly ? "Pu" : "Ka";
+        string[] duty = [$"ib{k}", $"idc{k}", "dcPercent", $"ibAsym{k}", $"ikSteady{k}", $"ith{k}"];
+        var all = new ColumnSpec<ShortCircuitLevel>().Include(Levels(perUnitOnly), f => f).Include(Duty(perUnitOnly).Select(duty), f => f);
+        return all.Select([
+            "bus", "type", $"ik{k}", .. duty, $"ip{k}", "skMva", "xOverR", "kappa", $"earthCurrent{k}", .. perUnitOnly ? new string[0] : ["kv"], "Z1", "Z0"]);
+    }
+
     /// <summary>Phase-voltage magnitudes after one fault, in pu of each bus's base.</summary>
     public static ColumnSpec<PhaseVoltages> Voltages { get; } = new ColumnSpec<PhaseVoltages>()
         .Words("bus", "bus", p => p.Bus, p => p.Bus + (p.Faulted ? " (faulted)" : ""))

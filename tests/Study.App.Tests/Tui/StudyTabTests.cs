@@ -109,10 +109,13 @@ public sealed class StudyTabTests
         Assert.True(double.Parse(levels.RowCells[0][2], System.Globalization.CultureInfo.InvariantCulture) > 1);
         Assert.Equal(FaultStudy.Caution, r.Caution);
 
-        var over = new FaultResult { Breakers = [new BreakerDuty { Id = "CB", Bus = "B", DutyPercent = 120, Status = DutyStatus.Over }] };
-        string[] row = FaultTables.Breakers(over).RowCells[0];
-        Assert.Contains("▲", row[1]);
-        Assert.Contains("OVER", row[2]);
+        // One row per check of each breaker: the duty and its status in words.
+        var over = new FaultResult { Breakers = [new BreakerDuty { Id = "CB", Bus = "B", DutyPercent = 120, Status = DutyStatus.Over,
+            Checks = [new DutyCheck { Check = DutyCheckKind.Breaking, DutyPercent = 120, Status = DutyStatus.Over }] }] };
+        TextTableSource breakers = FaultTables.Breakers(over);
+        string[] row = breakers.RowCells[0];
+        Assert.Contains("▲", row[Array.IndexOf(breakers.ColumnNames, "duty %")]);
+        Assert.Contains("OVER", row[Array.IndexOf(breakers.ColumnNames, "status")]);
     }
 
     [Fact]

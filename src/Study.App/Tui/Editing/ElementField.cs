@@ -129,7 +129,7 @@ public static class Field
             string t = text.Trim().ToLowerInvariant();
             if (t.Length == 0) return set((T)e, defaultValue)!;
             foreach (var (value, spelled) in spellings)
-                if (spelled == t) return set((T)e, value)!;
+                if (spelled.ToLowerInvariant() == t) return set((T)e, value)!;
             throw new FormatException($"{name}: one of {string.Join(", ", spellings.Select(s => s.Text))}");
         })
         { Options = _ => spellings.Select(s => new FieldOption(s.Text)).ToList() };

@@ -42,28 +42,61 @@ public static class NodeFields
         Field.Flag<Shunt>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
-    /// <summary>A first field list for motors (the nameplate a study needs); starters are edited in the file for now.</summary>
+    /// <summary>The starter methods in the file's spelling (declared before the field lists that use it: statics initialise in order).</summary>
+    private static readonly (StarterMethod, string)[] Starters =
+        [(StarterMethod.Direct, "direct"), (StarterMethod.StarDelta, "starDelta"), (StarterMethod.Autotransformer, "autotransformer"), (StarterMethod.SoftStarter, "softStarter")];
+
+    /// <summary>Motors, with the keys of the network file (README "Motors"); blanks take the defaults <c>study explain</c> states.</summary>
     public static IReadOnlyList<ElementField> Motor { get; } =
     [
         Field.Id<Motor>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
-        Field.Id<Motor>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.BusRef<Motor>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
         Field.Optional<Motor>("Rated output", "MW", "", e => e.Mw, (e, v) => e with { Mw = v }).Keyed("mw"),
         Field.Optional<Motor>("Rated", "kV", "", e => e.Kv, (e, v) => e with { Kv = v }).Keyed("kv"),
         Field.Optional<Motor>("Power factor", "", "", e => e.PowerFactor, (e, v) => e with { PowerFactor = v }).Keyed("powerFactor"),
         Field.Optional<Motor>("Efficiency", "", "", e => e.Efficiency, (e, v) => e with { Efficiency = v }).Keyed("efficiency"),
+        Field.Optional<Motor>("Pole pairs", "", "1", e => e.PolePairs, (e, v) => e with { PolePairs = Whole("Pole pairs", v) }).Keyed("polePairs"),
         Field.Integer<Motor>("Units", "", 1, e => e.Units, (e, v) => e with { Units = v }).Keyed("units"),
-        Field.Optional<Motor>("Locked-rotor current", "× rated", "", e => e.LockedRotor?.CurrentRatio,
-            (e, v) => e with { LockedRotor = (e.LockedRotor ?? new LockedRotor()) with { CurrentRatio = v } }).Keyed("lockedRotor.currentRatio"),
+        Field.Flag<Motor>("LV motor group", false, e => e.LowVoltageGroup, (e, v) => e with { LowVoltageGroup = v }).Keyed("lowVoltageGroup"),
         Field.Optional<Motor>("Running load", "%", "100", e => e.LoadPercent, (e, v) => e with { LoadPercent = v }).Keyed("loadPercent"),
+        Field.Optional<Motor>("Locked-rotor current", "× rated", "", e => e.LockedRotor?.CurrentRatio,
+            (e, v) => e with { LockedRotor = Rotor((e.LockedRotor ?? new LockedRotor()) with { CurrentRatio = v }) }).Keyed("lockedRotor.currentRatio"),
+        Field.Optional<Motor>("Locked-rotor p.f.", "", "0.3", e => e.LockedRotor?.PowerFactor,
+            (e, v) => e with { LockedRotor = Rotor((e.LockedRotor ?? new LockedRotor()) with { PowerFactor = v }) }).Keyed("lockedRotor.powerFactor"),
+        Field.Named<Motor, StarterMethod>("Starter", Starters, StarterMethod.Direct, e => e.Starter?.Method ?? StarterMethod.Direct,
+            (e, v) => e with { Starter = Starter((e.Starter ?? new MotorStarter()) with { Method = v }) }).Keyed("starter.method"),
+        Field.Optional<Motor>("Autotransformer tap", "%", "", e => e.Starter?.TapPercent,
+            (e, v) => e with { Starter = Starter((e.Starter ?? new MotorStarter()) with { TapPercent = v }) }).Keyed("starter.tapPercent"),
+        Field.Optional<Motor>("Soft-start limit", "× rated", "", e => e.Starter?.CurrentLimit,
+            (e, v) => e with { Starter = Starter((e.Starter ?? new MotorStarter()) with { CurrentLimit = v }) }).Keyed("starter.currentLimit"),
         Field.Flag<Motor>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 
+    /// <summary>A starter that says nothing beyond "direct" is left out of the file, as one never given.</summary>
+    private static MotorStarter? Starter(MotorStarter s) =>
+        s is { Method: StarterMethod.Direct, TapPercent: null, CurrentLimit: null } ? null : s;
+
+    private static LockedRotor? Rotor(LockedRotor r) => r is { CurrentRatio: null, PowerFactor: null } ? null : r;
+
+    private static int? Whole(string name, double? v) => v switch
+    {
+        null => null,
+        double x when x == Math.Floor(x) && Math.Abs(x) < 1000 => (int)x,
+        _ => throw new FormatException($"{name}: '{Field.Format(v.Value)}' is not a whole number"),
+    };
+
+    /// <summary>Breakers, with the keys of the network file (README "Breakers"): ratings for every duty check.</summary>
     public static IReadOnlyList<ElementField> Breaker { get; } =
     [
         Field.Id<Breaker>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
         Field.BusRef<Breaker>("Bus", e => e.Bus, (e, v) => e with { Bus = v }).Keyed("bus"),
+        Field.Text<Breaker>("Switched branch", e => e.Branch, (e, v) => e with { Branch = v }).Keyed("branch"),
         Field.Number<Breaker>("Breaking", "kA", 0, e => e.InterruptingKa, (e, v) => e with { InterruptingKa = v }).Keyed("interruptingKa"),
         Field.Number<Breaker>("Peak", "kA", 0, e => e.PeakKa, (e, v) => e with { PeakKa = v }).Keyed("peakKa"),
+        Field.Optional<Breaker>("Rated DC", "%", "", e => e.DcPercent, (e, v) => e with { DcPercent = v }).Keyed("dcPercent"),
+        Field.Optional<Breaker>("Short-time", "kA", "", e => e.ShortTimeKa, (e, v) => e with { ShortTimeKa = v }).Keyed("shortTimeKa"),
+        Field.Optional<Breaker>("Short-time for", "s", "1", e => e.ShortTimeS, (e, v) => e with { ShortTimeS = v }).Keyed("shortTimeS"),
+        Field.Optional<Breaker>("Opening time", "s", "study t_min", e => e.MinTripS, (e, v) => e with { MinTripS = v }).Keyed("minTripS"),
         Field.Flag<Breaker>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];
 

@@ -41,11 +41,18 @@ public static class FaultDialog
             Labels = ["all buses", form.SelectedBus is { } bus ? $"only bus {bus} (selected in the Buses table)" : "only the selected bus (none selected)"],
             Value = form.AllBuses ? 0 : 1,
         };
+        // Underscores are part of the names (t_min, I_b), not hotkey marks.
+        var plain = new System.Text.Rune(0xffff);
+        var timesLabel = new Label { X = 0, Y = 8, Text = "t_min s", HotKeySpecifier = plain };
+        var tMin = new TextField { X = 10, Y = 8, Width = 7, Text = form.TMinText };
+        var tkLabel = new Label { X = 18, Y = 8, Text = "T_k s", HotKeySpecifier = plain };
+        var tk = new TextField { X = 24, Y = 8, Width = 7, Text = form.DurationText };
+        var timesHint = new Label { X = 32, Y = 8, Width = Dim.Fill(), Text = "blank: 0.1 and 1 (I_b, i_DC; I_th)", HotKeySpecifier = plain };
         var caution = new TextPane { X = 0, Y = 9, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
         dialog.Add(kindsLabel);
         foreach (CheckBox box in boxes) dialog.Add(box);
-        dialog.Add(methodLabel, method, levelLabel, level, whereLabel, where, caution, status);
+        dialog.Add(methodLabel, method, levelLabel, level, whereLabel, where, timesLabel, tMin, tkLabel, tk, timesHint, caution, status);
         void Read()
         {
             form.Kinds.Clear();
@@ -54,6 +61,8 @@ public static class FaultDialog
             form.Method = method.Value == 1 ? FaultMethod.LoadFlow : FaultMethod.Iec60909;
             form.Level = level.Value == 1 ? FaultLevel.Min : FaultLevel.Max;
             form.AllBuses = where.Value != 1;
+            form.TMinText = tMin.Text;
+            form.DurationText = tk.Text;
         }
         return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
     }

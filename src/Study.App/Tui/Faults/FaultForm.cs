@@ -20,6 +20,12 @@ public sealed class FaultForm(string? selectedBus)
     /// <summary>True (the default): every bus; false: <see cref="SelectedBus"/> only, when the user asks for it.</summary>
     public bool AllBuses { get; set; } = true;
 
+    /// <summary>t_min in seconds as typed, for I_b and i_DC at breakers without their own opening time; blank: the engine's 0.1 s.</summary>
+    public string TMinText { get; set; } = "";
+
+    /// <summary>T_k in seconds as typed, the fault duration for I_th; blank: the engine's 1 s.</summary>
+    public string DurationText { get; set; } = "";
+
     public static string KindLabel(FaultKind kind) => kind switch
     {
         FaultKind.ThreePhase => "3ph  three-phase",
@@ -32,12 +38,32 @@ public sealed class FaultForm(string? selectedBus)
     {
         if (Kinds.Count == 0) return (null, "choose at least one fault kind");
         if (!AllBuses && SelectedBus is null) return (null, "no bus is selected: choose all buses, or select a bus in the Buses list first");
-        return (new FaultRequest
+        if (!Seconds(TMinText, FaultRequest.Default.TMinS, out double tMin)) return (null, "t_min is in seconds, e.g. 0.1");
+        if (!Seconds(DurationText, FaultRequest.Default.DurationS, out double tk)) return (null, "T_k is in seconds, e.g. 1");
+        var request = new FaultRequest
         {
             Kinds = AllKinds.Where(Kinds.Contains).ToList(),
             Method = Method,
             Level = Level,
             Buses = AllBuses ? null : [SelectedBus!],
-        }, null);
+            TMinS = tMin,
+            DurationS = tk,
+        };
+        try
+        {
+            request.Validate();
+        }
+        catch (Study.Core.Model.InputException e)
+        {
+            return (null, e.Message);
+        }
+        return (request, null);
+    }
+
+    private static bool Seconds(string text, double blank, out double value)
+    {
+        value = blank;
+        return text.Trim().Length == 0
+            || double.TryParse(text.Trim(), System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
     }
 }

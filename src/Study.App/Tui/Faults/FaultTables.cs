@@ -5,21 +5,21 @@ using Study.Core.Model;
 
 namespace Study.App.Tui.Faults;
 
-/// <summary>Duty reads without colour: "▲ OVER", "△ near".</summary>
+/// <summary>Duty reads without colour: "▲ OVER", "△ near"; one breaker row per check.</summary>
 public static class FaultTables
 {
-    public static string[] LevelHeaders => FaultColumns.ScreenLevels(false).Headings;
+    public static string[] LevelHeaders => FaultColumns.ScreenFaults(false).Headings;
 
     /// <summary>The levels' columns for a result: without Z0 when the zero sequence was not built (it would read "open").</summary>
     private static ColumnSpec<Study.Core.Faults.ShortCircuitLevel> LevelColumns(FaultResult r)
     {
-        var spec = FaultColumns.ScreenLevels(r.PerUnitOnly);
+        var spec = FaultColumns.ScreenFaults(r.PerUnitOnly);
         if (r.LeftOut.Count == 0) return spec;
         string[] keep = spec.Columns.Where(c => c.IsReadable && c.Header != "Z0").Select(c => c.Key ?? c.Header!).ToArray();
         return spec.Select(keep);
     }
 
-    public static string[] BreakerHeaders => FaultColumns.ScreenBreakers.Headings;
+    public static string[] BreakerHeaders => FaultColumns.Checks.Headings;
 
     /// <summary>How the faults were calculated, then every note and missing datum in full (<see cref="FaultNotes"/>).</summary>
     public static string Heading(FaultResult r, Network? network = null)
@@ -29,7 +29,8 @@ public static class FaultTables
         int buses = r.Faults.Select(f => f.Bus).Distinct().Count();
         int over = r.Breakers.Count(b => b.Status == DutyStatus.Over), near = r.Breakers.Count(b => b.Status == DutyStatus.Warning);
         string head = $"{method} {level} · {buses} bus(es) · breakers: {over} over {Marks.Over}, {near} near {Marks.Near}"
-            + (r.PerUnitOnly ? " · kV not stated: per unit only" : "");
+            + (r.PerUnitOnly ? " · kV not stated: per unit only" : "")
+            + $"\nI_b, i_DC, I_b,asym at t_min {Numbers.UpTo(r.TMinS, 3)} s (each breaker at its own opening time) · I_k with the motors left out (far from generators) · I_th for T_k {Numbers.UpTo(r.TkS, 3)} s";
         IReadOnlyList<string> notes = FaultNotes.Lines(r, network ?? new Network());
         return notes.Count == 0 ? head : head + "\n" + string.Join("\n", notes);
     }
@@ -37,5 +38,9 @@ public static class FaultTables
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>
     public static TextTableSource Levels(FaultResult r) => TextTableSource.Of(LevelColumns(r), r.Faults);
 
-    public static TextTableSource Breakers(FaultResult r) => TextTableSource.Of(FaultColumns.ScreenBreakers, r.Breakers);
+    /// <summary>Every check of every breaker as its own row (breaking, asymmetric breaking, making, short-time), with its status and worst side.</summary>
+    public static TextTableSource Breakers(FaultResult r) => TextTableSource.Of(FaultColumns.Checks, FaultColumns.CheckRows(r.Breakers));
+
+    /// <summary>The check behind each breaker row, in the same order, for row colours.</summary>
+    public static IReadOnlyList<DutyCheck> Checks(FaultResult r) => FaultColumns.CheckRows(r.Breakers).Select(x => x.Check).ToList();
 }

@@ -12,7 +12,7 @@ namespace Study.App.Tui.Faults;
 /// <summary>
 /// The caution is its own pane above everything and never scrolls. Under it the heading says how the
 /// faults were calculated and gives every note and missing datum in full (it scrolls when long). The
-/// levels and the breaker duty share the rest, the focused table taking two thirds. Breaker rows over
+/// levels (with the breaking and thermal currents) and every check of every breaker share the rest, the focused table taking two thirds. Breaker rows over
 /// their rating are marked "▲ OVER" (and coloured); rows above 90 % "△ near".
 /// </summary>
 public sealed class FaultView : View
@@ -23,6 +23,7 @@ public sealed class FaultView : View
     private readonly ResultTable levels = new(FaultTables.LevelHeaders);
     private readonly ResultTable breakers = new(FaultTables.BreakerHeaders);
     private FaultResult? result;
+    private IReadOnlyList<DutyCheck> checks = [];
 
     public FaultView()
     {
@@ -51,6 +52,7 @@ public sealed class FaultView : View
     public void Show(FaultResult? value, Network? network)
     {
         result = value;
+        checks = value is null ? [] : FaultTables.Checks(value);
         caution.Content = CautionText(value?.Caution ?? FaultStudy.Caution);
         heading.Content = value is null ? NotYet : FaultTables.Heading(value, network);
         levels.Source = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
@@ -70,8 +72,8 @@ public sealed class FaultView : View
 
     private Scheme? BreakerScheme(int row)
     {
-        if (result is null || row < 0 || row >= result.Breakers.Count) return null;
-        DutyStatus s = result.Breakers[row].Status;
+        if (row < 0 || row >= checks.Count) return null;
+        DutyStatus s = checks[row].Status;
         if (s is not (DutyStatus.Over or DutyStatus.Warning)) return null;
         Attr normal = GetAttributeForRole(VisualRole.Normal);
         return new Scheme(s == DutyStatus.Over

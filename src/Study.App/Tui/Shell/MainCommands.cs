@@ -76,6 +76,9 @@ public sealed class MainCommands
             case TuiAction.ApplyTap: Studies.ApplyRecommendedTap(); break;
             case TuiAction.Outages: Studies.Outages(); break;
             case TuiAction.Compare: Studies.Compare(); break;
+            case TuiAction.MotorStart: Start.StartStudy.Run(main); break;
+            case TuiAction.Profile: Profile.ProfileStudy.Run(main); break;
+            case TuiAction.BankChoice: Choice.ChoiceStudy.Run(main); break;
             case TuiAction.Scenario: ChooseScenario(); break;
             case TuiAction.Cancel: main.Runner.Cancel(); break;
             case TuiAction.ShowDetail: main.Results.Value = main.Results.DetailTab; break;
@@ -87,6 +90,10 @@ public sealed class MainCommands
             case TuiAction.ShowOneLine: main.Results.Value = main.Results.OneLineTab; break;
             case TuiAction.ShowVoltageChart: main.Results.Value = main.Results.ChartTab; break;
             case TuiAction.ShowCompare: main.Results.Value = main.Results.CompareTab; break;
+            case TuiAction.ShowStart: main.Results.Value = main.Results.StartTab; break;
+            case TuiAction.ShowProfile: main.Results.Value = main.Results.ProfileTab; break;
+            case TuiAction.ShowBankChoice: main.Results.Value = main.Results.BankChoiceTab; break;
+            case TuiAction.SwitchCostAxis: main.Results.BankChoice.SwitchAxis(); break;
             case TuiAction.EnlargeResults: main.EnlargeResults = !main.EnlargeResults; break;
             case TuiAction.Sort: Sort(); break;
             case TuiAction.Help: HelpDialog.Run(App); break;

@@ -13,7 +13,7 @@ using Terminal.Gui.Views;
 namespace Study.App.Tui.Shell;
 
 /// <summary>The kinds of result the screen holds, each shown in one or more tabs.</summary>
-public enum ResultKind { LoadFlow, Fault, Taps, Outages, Compare }
+public enum ResultKind { LoadFlow, Fault, Taps, Outages, Compare, Start, Profile, BankChoice }
 
 /// <summary>
 /// What a result was computed from: the networks it holds for (the one studied, and any the user made
@@ -142,6 +142,9 @@ public sealed class MainWindow : Window
         Results.TapStudyResult = null;
         Results.OutageResult = null;
         Results.Comparison.Show(null);
+        Results.Start.Result = null;
+        Results.Profile.Show(null);
+        Results.BankChoice.Show(null);
         stamps.Clear();
         failures.Clear();
         Refresh();
@@ -192,6 +195,9 @@ public sealed class MainWindow : Window
             case ResultKind.Taps: Results.TapStudyResult = null; break;
             case ResultKind.Outages: Results.OutageResult = null; break;
             case ResultKind.Compare: Results.Comparison.Show(null); break;
+            case ResultKind.Start: Results.Start.Result = null; break;
+            case ResultKind.Profile: Results.Profile.Show(null); break;
+            case ResultKind.BankChoice: Results.BankChoice.Show(null); break;
         }
         stamps.Remove(what);
         failures[what] = message;
@@ -276,6 +282,9 @@ public sealed class MainWindow : Window
         Set(ResultKind.Taps, "tap study", "F8", false, Results.TapStudyTab);
         Set(ResultKind.Outages, "outage screening", "Alt+U", false, Results.OutagesTab);
         Set(ResultKind.Compare, "comparison", "Alt+C", false, Results.CompareTab);
+        Set(ResultKind.Start, "motor start", "Alt+M", false, Results.StartTab);
+        Set(ResultKind.Profile, "profile", "Alt+L", false, Results.ProfileTab);
+        Set(ResultKind.BankChoice, "bank choice", "Alt+B", false, Results.BankChoiceTab);
     }
 
     /// <summary>The one-line view shows the network as edited, with the last solve's values only while they are of this network.</summary>

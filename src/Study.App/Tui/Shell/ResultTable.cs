@@ -30,6 +30,8 @@ public sealed partial class ResultTable : TableView
         FullRowSelect = true;
         Style.ShowHorizontalHeaderOverline = false;
         Style.ShowHorizontalBottomLine = false;
+        // The headings stay on the first row when the rows scroll: a column of numbers means nothing without its unit.
+        Style.AlwaysShowHeaders = true;
         Style.RowColorGetter = args => args.RowIndex >= 0 && args.RowIndex < order.Length ? RowScheme?.Invoke(order[args.RowIndex]) : null;
         Source = TextTableSource.Empty(headers);
     }

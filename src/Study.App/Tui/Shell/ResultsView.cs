@@ -1,9 +1,12 @@
 // The detail/result pane: a strip of tab names, then the shown tab (its notice on top, its content below).
 using Study.App.Reports;
+using Study.App.Tui.Choice;
 using Study.App.Tui.Compare;
 using Study.App.Tui.Faults;
 using Study.App.Tui.LoadFlow;
 using Study.App.Tui.Outages;
+using Study.App.Tui.Profile;
+using Study.App.Tui.Start;
 using Study.App.Tui.Taps;
 using Study.Core.Faults;
 using Study.Core.LoadFlow;
@@ -67,6 +70,9 @@ public sealed class ResultsView : FrameView
     private readonly OneLineView oneLine = new();
     private readonly OutageView outages = new();
     private readonly CompareView compare = new();
+    private readonly StartView start = new();
+    private readonly ProfileView profile = new();
+    private readonly ChoiceView bankChoice = new();
     private ResultTab current;
     private LoadFlowResult? result;
 
@@ -87,6 +93,9 @@ public sealed class ResultsView : FrameView
         ChartTab = Tab("Chart", chart);
         OutagesTab = Tab("Outages", outages);
         CompareTab = Tab("Compare", compare);
+        StartTab = Tab("Start", start);
+        ProfileTab = Tab("Profile", profile);
+        BankChoiceTab = Tab("Bank", bankChoice);
         strip.Titles = tabs.Select(t => t.Title).ToList();
         current = tabs[0];
         Show(current);
@@ -105,6 +114,9 @@ public sealed class ResultsView : FrameView
     public ResultTab ChartTab { get; }
     public ResultTab OutagesTab { get; }
     public ResultTab CompareTab { get; }
+    public ResultTab StartTab { get; }
+    public ResultTab ProfileTab { get; }
+    public ResultTab BankChoiceTab { get; }
 
     public IReadOnlyList<ResultTab> Tabs => tabs;
 
@@ -161,6 +173,12 @@ public sealed class ResultsView : FrameView
     }
 
     public CompareView Comparison => compare;
+
+    public StartView Start => start;
+
+    public ProfileView Profile => profile;
+
+    public ChoiceView BankChoice => bankChoice;
 
     public IReadOnlyList<OneLineRow> OneLine
     {

@@ -8,7 +8,7 @@ namespace Study.App.Tui.Shell;
 /// Draws the tab names on one row; never takes focus (Alt+1…9 switch tabs), so arrow keys cannot land
 /// on it. The shown tab reads "[Buses]" and is drawn in the focus colour, so it reads without colour.
 /// When the names do not fit, the strip scrolls to keep the shown one visible and marks the hidden
-/// ones with ◄ and ►. With room to spare each name carries its Alt+digit.
+/// ones with ◄ and ►. With room to spare each of the first ten names carries its Alt+digit (the tenth Alt+0).
 /// </summary>
 public sealed class TabStrip : View
 {
@@ -47,7 +47,7 @@ public sealed class TabStrip : View
     {
         if (titles.Count == 0 || width <= 0) return ("", 0, 0);
         IReadOnlyList<string> Items(bool digits) =>
-            titles.Select((t, i) => (digits ? $"{i + 1} " : "") + t).Select((t, i) => i == selected ? $"[{t}]" : $" {t} ").ToList();
+            titles.Select((t, i) => (digits && i < 10 ? $"{(i + 1) % 10} " : "") + t).Select((t, i) => i == selected ? $"[{t}]" : $" {t} ").ToList();
         IReadOnlyList<string> items = Items(digits: true);
         if (items.Sum(i => i.Length) + items.Count - 1 > width) items = Items(digits: false);
         // The first item shown: as far left as possible while the selected one still fits, room left for the marks.

@@ -10,8 +10,8 @@ public enum TuiAction
 {
     Open, Save, SaveAs, Quit,
     Add, Edit, Delete, Duplicate, Undo, Redo,
-    LoadFlow, Fault, TapStudy, ApplyTap, Outages, Compare, Scenario, Cancel,
-    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, ShowCompare, EnlargeResults, Sort,
+    LoadFlow, Fault, TapStudy, ApplyTap, Outages, Compare, MotorStart, Profile, BankChoice, Scenario, Cancel,
+    ShowDetail, ShowBuses, ShowBranches, ShowFaults, ShowTapStudy, ShowOutages, ShowOneLine, ShowVoltageChart, ShowCompare, ShowStart, ShowProfile, ShowBankChoice, SwitchCostAxis, EnlargeResults, Sort,
     Help,
 }
 
@@ -42,6 +42,9 @@ public static class TuiCommands
         new(TuiAction.ApplyTap, "Study", "_Apply recommended tap", "Set the best position of the last tap study", Key.P.WithAlt),
         new(TuiAction.Outages, "Study", "_Outage screening…", "Each line and transformer out in turn, ranked", Key.U.WithAlt),
         new(TuiAction.Compare, "Study", "Co_mpare…", "Two scenarios, or the file before a change", Key.C.WithAlt),
+        new(TuiAction.MotorStart, "Study", "Motor _start…", "The voltage dip when motors start, at every bus", Key.M.WithAlt),
+        new(TuiAction.Profile, "Study", "Load _profile…", "A load flow per step of a profile CSV: taps, voltages, energy", Key.L.WithAlt),
+        new(TuiAction.BankChoice, "Study", "_Bank choice…", "Candidate banks for a transformer, ranked by owning cost", Key.B.WithAlt),
         new(TuiAction.Scenario, "Study", "_Scenario…", "The scenario studies run in (kept per file)", Key.N.WithAlt),
         new(TuiAction.Cancel, "Study", "_Cancel study", "Stop the study that is running", Key.Esc),
         new(TuiAction.ShowDetail, "View", "_Detail", "Selected element: fields, problems, per unit", Key.D1.WithAlt),
@@ -53,6 +56,10 @@ public static class TuiCommands
         new(TuiAction.ShowVoltageChart, "View", "_Chart", "Bus voltages against the band", Key.D7.WithAlt),
         new(TuiAction.ShowOutages, "View", "O_utages", "Outage-screening results", Key.D8.WithAlt),
         new(TuiAction.ShowCompare, "View", "Co_mpare", "Before/after comparison", Key.D9.WithAlt),
+        new(TuiAction.ShowStart, "View", "Motor s_tart", "Motor-start dips and terminal voltages", Key.D0.WithAlt),
+        new(TuiAction.ShowProfile, "View", "_Profile", "Profile chart over time and the energy table", Key.F11),
+        new(TuiAction.ShowBankChoice, "View", "Ban_k choice", "Candidate banks, their binding constraint and the cost chart", Key.F12),
+        new(TuiAction.SwitchCostAxis, "View", "Bank chart a_xis", "Bank-choice chart: max breaker duty or voltage margin", Key.X.WithAlt),
         new(TuiAction.EnlargeResults, "View", "_Enlarge results", "Results take the screen, or give the table back", Key.R.WithAlt),
         new(TuiAction.Sort, "View", "_Sort table…", "Sort the table by a column (again: reverse)", Key.F9),
         new(TuiAction.Help, "Help", "_Keys", "This list of keys", Key.F1),

@@ -1,0 +1,72 @@
+// The bank-choice question as a dialog.
+using Study.App.Tui.Shell;
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace Study.App.Tui.Choice;
+
+/// <summary>Fills a <see cref="ChoiceForm"/>. Enter runs, Esc cancels (and stops the study once it runs).</summary>
+public static class ChoiceDialog
+{
+    public static bool Run(IApplication app, ChoiceForm form)
+    {
+        Dialog dialog = Build(form, out Label status, out Action read, out View first);
+        return Prompts.RunStudyDialog(app, dialog, status, read, () => form.Build().Error, first);
+    }
+
+    public static Dialog Build(ChoiceForm form, out Label status, out Action read, out View first)
+    {
+        var dialog = new Dialog { Title = "Bank choice", Width = Dim.Percent(94), Height = Dim.Percent(94) };
+        const int at = 15;
+        var transformer = new OptionSelector
+        {
+            X = at, Y = 0, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            Labels = form.Transformers.Count == 0 ? ["(none)"] : form.Transformers.ToList(),
+            Value = Math.Max(0, form.Transformers.ToList().IndexOf(form.TransformerId)),
+        };
+        var candidates = new TextField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
+        var factor = new TextField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
+        var profile = new TextField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
+        var noLoad = new TextField { X = at, Y = 4, Width = 10, Text = form.NoLoadRateText };
+        var load = new TextField { X = at + 20, Y = 4, Width = 10, Text = form.LoadRateText };
+        var low = new TextField { X = at, Y = 5, Width = 8, Text = form.BandLowText };
+        var high = new TextField { X = at + 14, Y = 5, Width = 8, Text = form.BandHighText };
+        var scenarios = new OptionSelector
+        {
+            X = at, Y = 6, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            Labels = ["all scenarios", $"the active one ({form.ActiveScenarioLabel})"],
+            Value = form.AllScenarios ? 0 : 1,
+        };
+        status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running choice" };
+        dialog.Add(
+            new Label { X = 0, Y = 0, Text = "Transformer" }, transformer,
+            new Label { X = 0, Y = 1, Text = "Candidates" }, candidates,
+            new Label { X = 0, Y = 2, Text = "Loss-load" }, factor,
+            new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "factor 0..1, or a profile below (one of the two)" },
+            new Label { X = 0, Y = 3, Text = "Profile CSV" }, profile,
+            new Label { X = 0, Y = 4, Text = "No-load A" }, noLoad,
+            new Label { X = at + 11, Y = 4, Text = "Load B" }, load,
+            new Label { X = at + 31, Y = 4, Width = Dim.Fill(), Text = "money per kW; blank 0" },
+            new Label { X = 0, Y = 5, Text = "Band pu  low" }, low,
+            new Label { X = at + 9, Y = 5, Text = "high" }, high,
+            new Label { X = at + 23, Y = 5, Width = Dim.Fill(), Text = "blank: each bus's own" },
+            new Label { X = 0, Y = 6, Text = "Scenarios" }, scenarios,
+            new TextPane { X = 0, Y = 8, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + Study.Core.Faults.FaultStudy.Caution },
+            status);
+        read = () =>
+        {
+            form.TransformerId = form.Transformers.Count == 0 ? "" : form.Transformers[Math.Clamp(transformer.Value ?? 0, 0, form.Transformers.Count - 1)];
+            form.CandidatesText = candidates.Text;
+            form.LossLoadFactorText = factor.Text;
+            form.ProfileText = profile.Text;
+            form.NoLoadRateText = noLoad.Text;
+            form.LoadRateText = load.Text;
+            form.BandLowText = low.Text;
+            form.BandHighText = high.Text;
+            form.AllScenarios = scenarios.Value != 1;
+        };
+        first = candidates;
+        return dialog;
+    }
+}

@@ -1,0 +1,50 @@
+// The profile question as a dialog: the CSV, the step length, the scenario and the watched buses.
+using Study.App.Reports;
+using Study.App.Tui.Shell;
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace Study.App.Tui.Profile;
+
+/// <summary>Fills a <see cref="ProfileForm"/>. Enter runs, Esc cancels (and Esc stops the study once it runs).</summary>
+public static class ProfileDialog
+{
+    public static bool Run(IApplication app, ProfileForm form)
+    {
+        Dialog dialog = Build(form, out Label status, out Action read, out View first);
+        return Prompts.RunStudyDialog(app, dialog, status, read, () => form.Build().Error, first);
+    }
+
+    public static Dialog Build(ProfileForm form, out Label status, out Action read, out View first)
+    {
+        var dialog = new Dialog { Title = "Load profile", Width = Dim.Percent(90), Height = 17 };
+        var csvLabel = new Label { X = 0, Y = 0, Text = "Profile CSV" };
+        var csv = new TextField { X = 14, Y = 0, Width = Dim.Fill(), Text = form.CsvText };
+        var csvHint = new Label { X = 14, Y = 1, Width = Dim.Fill(), Text = "time (ISO 8601), then 'scale' or a column per load id" };
+        var stepLabel = new Label { X = 0, Y = 3, Text = "Step minutes" };
+        var step = new TextField { X = 14, Y = 3, Width = 8, Text = form.StepMinutesText };
+        var stepHint = new Label { X = 23, Y = 3, Width = Dim.Fill(), Text = "blank: the spacing of the time column" };
+        var watchLabel = new Label { X = 0, Y = 5, Text = "Watch buses" };
+        var watch = new TextField { X = 14, Y = 5, Width = Dim.Fill(), Text = form.WatchText };
+        var watchHint = new Label { X = 14, Y = 6, Width = Dim.Fill(), Text = "ids by comma; blank: those on-load taps regulate" };
+        var scenLabel = new Label { X = 0, Y = 8, Text = "Scenario" };
+        var scenario = new OptionSelector
+        {
+            X = 14, Y = 8, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            Labels = form.ScenarioChoices.Select(Labels.Scenario).ToList(),
+            Value = Math.Max(0, form.ScenarioChoices.ToList().IndexOf(form.Scenario)),
+        };
+        status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running profile" };
+        dialog.Add(csvLabel, csv, csvHint, stepLabel, step, stepHint, watchLabel, watch, watchHint, scenLabel, scenario, status);
+        read = () =>
+        {
+            form.CsvText = csv.Text;
+            form.StepMinutesText = step.Text;
+            form.WatchText = watch.Text;
+            form.Scenario = form.ScenarioChoices[Math.Clamp(scenario.Value ?? 0, 0, form.ScenarioChoices.Count - 1)];
+        };
+        first = csv;
+        return dialog;
+    }
+}
