@@ -17,7 +17,12 @@ public static class LoadFlowSolver
         Solve(model, options ?? LoadFlowOptions.Default, cancel, out _);
 
     /// <summary>The load flow, and the solver that reached it (its state and factors seed outage solves).</summary>
-    internal static LoadFlowResult Solve(PerUnitModel model, LoadFlowOptions options, CancellationToken cancel, out NewtonRaphson solver)
+    /// <param name="symbolic">
+    /// The symbolic analysis of an earlier solve of a network of the same branches and buses (only loads,
+    /// generation or tap positions changed): its Jacobian has the same pattern, so the analysis is reused.
+    /// </param>
+    internal static LoadFlowResult Solve(PerUnitModel model, LoadFlowOptions options, CancellationToken cancel, out NewtonRaphson solver,
+        Numerics.LuSymbolic? symbolic = null)
     {
         long start = Stopwatch.GetTimestamp();
         var schedule = new BusSchedule(model);
@@ -25,7 +30,7 @@ public static class LoadFlowSolver
         BusSchedule.MarkDead(schedule.Type, island);
         var y = new AdmittanceMatrix(model);
         long admittance = Stopwatch.GetTimestamp();
-        var nr = new NewtonRaphson(y, schedule);
+        var nr = new NewtonRaphson(y, schedule, symbolic);
         solver = nr;
         long analysed = Stopwatch.GetTimestamp();
         LoadFlowTimings Timings() => new()

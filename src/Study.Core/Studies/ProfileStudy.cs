@@ -34,6 +34,8 @@ public static class ProfileStudy
         var series = new SeriesBuilder(profile.Steps.Count, watched.Length, model.Taps.Count);
         PerUnitModel current = model;
         LoadFlowResult? previous = null;
+        // Every step and every tap move solves a network of the same branches: one symbolic analysis serves all.
+        var solver = new StepSolver(solveOptions, cancel);
         int failed = 0;
         string? firstFailure = null;
         for (int s = 0; s < profile.Steps.Count; s++)
@@ -41,8 +43,8 @@ public static class ProfileStudy
             cancel.ThrowIfCancellationRequested();
             ProfileStep step = profile.Steps[s];
             current = current with { Loads = Scaled(model.Loads, step, scaleColumn) };
-            LoadFlowResult r = LoadFlowSolver.Solve(current, solveOptions with { WarmStart = previous }, cancel);
-            if (r.Converged && groups.Count > 0) (current, r) = Regulate(current, r, groups, stats, solveOptions, cancel);
+            LoadFlowResult r = solver.Solve(current, previous);
+            if (r.Converged && groups.Count > 0) (current, r) = Regulate(current, r, groups, stats, solver);
             if (r.Converged)
             {
                 previous = r;
@@ -93,8 +95,21 @@ public static class ProfileStudy
     }
 
     /// <summary>The tap rule of one step: one position at a time toward the band, re-solving after each round of moves.</summary>
+    /// <summary>Warm-started solves of one network's steps, sharing the symbolic analysis of the first.</summary>
+    private sealed class StepSolver(LoadFlowOptions options, CancellationToken cancel)
+    {
+        private Numerics.LuSymbolic? symbolic;
+
+        public LoadFlowResult Solve(PerUnitModel model, LoadFlowResult? warm)
+        {
+            LoadFlowResult r = LoadFlowSolver.Solve(model, options with { WarmStart = warm }, cancel, out NewtonRaphson nr, symbolic);
+            symbolic ??= nr.JacobianSize > 0 ? nr.Symbolic : null;
+            return r;
+        }
+    }
+
     private static (PerUnitModel, LoadFlowResult) Regulate(PerUnitModel model, LoadFlowResult r, List<(int Bus, int[] Taps)> groups,
-        Accumulator stats, LoadFlowOptions options, CancellationToken cancel)
+        Accumulator stats, StepSolver solver)
     {
         var lastMove = new int[groups.Count];
         var done = new bool[groups.Count];
@@ -134,7 +149,7 @@ public static class ProfileStudy
                 moved |= groupMoved;
             }
             if (!moved) break;
-            r = LoadFlowSolver.Solve(model, options with { WarmStart = r }, cancel);
+            r = solver.Solve(model, r);
             if (!r.Converged) break;
         }
         return (model, r);
