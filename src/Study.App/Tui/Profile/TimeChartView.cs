@@ -2,55 +2,19 @@
 using System.Globalization;
 using System.Text;
 using Terminal.Gui.Drawing;
-using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using Study.App.Tui.Shell;
 using Attr = Terminal.Gui.Drawing.Attribute;
 
 namespace Study.App.Tui.Profile;
 
-/// <summary>A GraphView fed from a <see cref="TimeChart"/>; the scale follows the view's size on every draw. Each series has its own glyph, so it reads without colour.</summary>
-public sealed class TimeChartView : GraphView
+/// <summary>A <see cref="TimeChart"/> in a <see cref="ChartView{TChart}"/>: each series' lowest and highest values against time.</summary>
+public sealed class TimeChartView() : ChartView<TimeChart>(marginBottom: 1) // one row for the time labels: the legend under the chart says what is drawn
 {
-    private static readonly ColorName16[] Colours = [ColorName16.BrightYellow, ColorName16.BrightCyan, ColorName16.BrightGreen, ColorName16.BrightMagenta];
-    private TimeChart? chart;
     private int yDecimals = 3;
 
-    public TimeChartView()
+    protected override void Plot(TimeChart chart, Attr normal)
     {
-        Width = Dim.Fill();
-        Height = Dim.Fill();
-        MarginLeft = 7;
-        // One row for the time labels: the legend under the chart says what is drawn.
-        MarginBottom = 1;
-        CanFocus = true;
-    }
-
-    public TimeChart? Chart
-    {
-        get => chart;
-        set
-        {
-            chart = value;
-            Rebuild();
-        }
-    }
-
-    protected override bool OnDrawingContent(DrawContext? context)
-    {
-        Scale();
-        return base.OnDrawingContent(context);
-    }
-
-    private void Rebuild()
-    {
-        Series.Clear();
-        Annotations.Clear();
-        if (chart is null)
-        {
-            SetNeedsDraw();
-            return;
-        }
-        Attr normal = GetAttributeForRole(VisualRole.Normal);
         var band = new Attr(ColorName16.Red, normal.Background);
         foreach (double? v in new[] { chart.BandLow, chart.BandHigh })
             if (v is double y)
@@ -69,15 +33,12 @@ public sealed class TimeChartView : GraphView
         AxisX.LabelGetter = i => i.Value < -1e-6 || i.Value > chart.Hours + 1e-6 ? "" : chart.TimeLabel(i.Value);
         AxisY.LabelGetter = i => Math.Round(i.Value + chart.YShift, 4).ToString("F" + yDecimals, CultureInfo.InvariantCulture);
         AxisY.Text = chart.Unit;
-        SetNeedsDraw();
     }
 
     /// <summary>Fits the whole profile across the width and the value range into the height.</summary>
-    private void Scale()
+    protected override void Fit(TimeChart chart)
     {
-        if (chart is null) return;
-        int cols = Math.Max(4, Viewport.Width - (int)MarginLeft - 1);
-        int rows = Math.Max(1, Viewport.Height - (int)MarginBottom);
+        (int cols, int rows) = PlotCells(leastRows: 1);
         float xPerCell = (float)(Math.Max(chart.Hours, 1e-6) / cols);
         (double origin, double step, int rowsPerTick) = chart.ValueAxis(rows);
         CellSize = new System.Drawing.PointF(xPerCell, (float)(step / rowsPerTick));
@@ -86,6 +47,6 @@ public sealed class TimeChartView : GraphView
         AxisX.ShowLabelsEvery = 1;
         AxisY.Increment = (float)step;
         AxisY.ShowLabelsEvery = 1;
-        yDecimals = chart.Whole || step >= 1 ? 0 : step >= 0.1 ? 1 : step >= 0.01 ? 2 : 3;
+        yDecimals = chart.Whole ? 0 : DecimalsFor(step);
     }
 }

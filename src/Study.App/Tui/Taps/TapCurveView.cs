@@ -2,54 +2,19 @@
 using Study.App.Reports;
 using System.Text;
 using Terminal.Gui.Drawing;
-using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using Study.App.Tui.Shell;
 using Attr = Terminal.Gui.Drawing.Attribute;
 
 namespace Study.App.Tui.Taps;
 
-/// <summary>A GraphView fed from a <see cref="TapCurve"/>; the scale follows the view's size on every draw.</summary>
-public sealed class TapCurveView : GraphView
+/// <summary>The tap curve in a <see cref="ChartView{TChart}"/>: positions across, voltage up, the band dashed.</summary>
+public sealed class TapCurveView() : ChartView<TapCurve>(marginBottom: 2)
 {
-    private static readonly ColorName16[] Colours = [ColorName16.BrightYellow, ColorName16.BrightCyan, ColorName16.BrightGreen, ColorName16.BrightMagenta];
-    private TapCurve? curve;
     private int yDecimals = 3;
 
-    public TapCurveView()
+    protected override void Plot(TapCurve curve, Attr normal)
     {
-        Width = Dim.Fill();
-        Height = Dim.Fill();
-        MarginLeft = 7;
-        MarginBottom = 2;
-        CanFocus = true;
-    }
-
-    public TapCurve? Curve
-    {
-        get => curve;
-        set
-        {
-            curve = value;
-            Rebuild();
-        }
-    }
-
-    protected override bool OnDrawingContent(DrawContext? context)
-    {
-        Scale();
-        return base.OnDrawingContent(context);
-    }
-
-    private void Rebuild()
-    {
-        Series.Clear();
-        Annotations.Clear();
-        if (curve is null)
-        {
-            SetNeedsDraw();
-            return;
-        }
-        Attr normal = GetAttributeForRole(VisualRole.Normal);
         var band = new Attr(ColorName16.Red, normal.Background);
         foreach (double v in new[] { curve.BandLowPu, curve.BandHighPu })
             Annotations.Add(new PathAnnotation
@@ -76,15 +41,12 @@ public sealed class TapCurveView : GraphView
         AxisX.Text = "tap position";
         AxisY.LabelGetter = i => Math.Round(i.Value, 4).ToString("F" + yDecimals, System.Globalization.CultureInfo.InvariantCulture);
         AxisY.Text = "pu";
-        SetNeedsDraw();
     }
 
     /// <summary>Fits the positions across the width and the voltage range into the height.</summary>
-    private void Scale()
+    protected override void Fit(TapCurve curve)
     {
-        if (curve is null) return;
-        int cols = Math.Max(4, Viewport.Width - (int)MarginLeft - 1);
-        int rows = Math.Max(3, Viewport.Height - (int)MarginBottom);
+        (int cols, int rows) = PlotCells(leastRows: 3);
         float xPerCell = (float)curve.XSpan / cols;
         (double origin, double step, int rowsPerTick) = curve.VoltageAxis(rows);
         float yPerCell = (float)(step / rowsPerTick);
@@ -97,6 +59,6 @@ public sealed class TapCurveView : GraphView
         AxisX.ShowLabelsEvery = (uint)(positions <= 1 ? 1 : every);
         AxisY.Increment = (float)step;
         AxisY.ShowLabelsEvery = 1;
-        yDecimals = step >= 1 ? 0 : step >= 0.1 ? 1 : step >= 0.01 ? 2 : 3;
+        yDecimals = DecimalsFor(step);
     }
 }

@@ -68,7 +68,7 @@ public sealed class TapStudyView : View
         {
             table.Source = value is null ? TextTableSource.Empty("Pos") : TapStudyTables.Positions(value);
             TapCurve? curve = value is null ? null : TapCurve.From(value);
-            chart.Curve = curve;
+            chart.Chart = curve;
             legend.Content = curve?.Legend() ?? "";
             if (value is not null && TapStudyTables.BestRow(value) is int best) table.SelectedRow = best;
         }
