@@ -54,10 +54,7 @@ public sealed class ChooseCommand : CliCommand
 
         ReportDocument report = ChooseReport.Build(path, study.Network, candidatesPath, result);
         if (args.Value("csv") is string dir)
-        {
-            Directory.CreateDirectory(dir);
-            CsvTable.Of(ChooseColumns.Candidates, ChooseColumns.Rows(result)).Write(Path.Combine(dir, "candidates.csv"));
-        }
+            CsvTable.WriteSet(dir, ("candidates.csv", CsvTable.Of(ChooseColumns.Candidates, ChooseColumns.Rows(result))));
         if (args.Value("markdown") is string markdown) ReportFiles.WriteMarkdown(markdown, report);
         if (args.Has("json")) CliJson.Write(context, ChooseJson.From(result));
         else context.Out.Write(PlainTextReport.Render(report));

@@ -50,12 +50,9 @@ public sealed class ProfileCommand : CliCommand
 /// <summary>`--csv DIR` for the profile: one table per file.</summary>
 public static class ProfileCsv
 {
-    public static void Write(ProfileResult r, string dir)
-    {
-        Directory.CreateDirectory(dir);
-        CsvTable.Of(ProfileColumns.Buses, r.Buses).Write(Path.Combine(dir, "buses.csv"));
-        CsvTable.Of(ProfileColumns.Transformers, r.Transformers).Write(Path.Combine(dir, "transformers.csv"));
-        CsvTable.Of(ProfileColumns.Energy, ProfileColumns.EnergyRows(r.Energy)).Write(Path.Combine(dir, "energy.csv"));
-        CsvTable.Of(ProfileColumns.Steps(r.Series), ProfileColumns.StepRows(r.Series)).Write(Path.Combine(dir, "steps.csv"));
-    }
+    public static void Write(ProfileResult r, string dir) => CsvTable.WriteSet(dir,
+        ("buses.csv", CsvTable.Of(ProfileColumns.Buses, r.Buses)),
+        ("transformers.csv", CsvTable.Of(ProfileColumns.Transformers, r.Transformers)),
+        ("energy.csv", CsvTable.Of(ProfileColumns.Energy, ProfileColumns.EnergyRows(r.Energy))),
+        ("steps.csv", CsvTable.Of(ProfileColumns.Steps(r.Series), ProfileColumns.StepRows(r.Series))));
 }
