@@ -30,5 +30,5 @@ public static class ChooseColumns
         .Number("price", "price", null, r => r.Candidate.Price, 0)
         .Number("capitalisedLosses", "losses A·P0+B·Pk", null, r => r.Candidate.CapitalisedLosses, 0)
         .Number("totalOwningCost", "total owning cost", null, r => r.Candidate.TotalOwningCost, 0)
-        .CsvOnly("reasons", r => string.Join("; ", r.Candidate.Reasons));
+        .CsvOnly("reasons", r => string.Join("; ", r.Candidate.Reasons.Select(x => x.Text)));
 }

@@ -47,8 +47,8 @@ public sealed record CandidateAssessment
     public required string Id { get; init; }
     public string? Description { get; init; }
     public bool Feasible => Reasons.Count == 0;
-    /// <summary>Why the candidate fails, one sentence each ("CB-CS11 breaking duty 104 %").</summary>
-    public IReadOnlyList<string> Reasons { get; init; } = [];
+    /// <summary>Why the candidate fails, one reason per constraint broken, each with its sentence.</summary>
+    public IReadOnlyList<CandidateReason> Reasons { get; init; } = [];
     /// <summary>The best fixed tap position; null for an on-load changer (it regulates) or when none holds the band.</summary>
     public int? BestTap { get; init; }
     public bool OnLoad { get; init; }
@@ -187,12 +187,12 @@ internal static class BankChoice
             Id = c.Id, Description = c.Description, NoLoadLossKw = p0, LoadLossKw = pk, Price = c.Price,
             CapitalisedLosses = capitalised, TotalOwningCost = c.Price + capitalised, OnLoad = c.Tap?.Regulate is not null,
         };
-        var reasons = new List<string>();
+        var reasons = new List<CandidateReason>();
         var notes = new List<string>();
         string where = file.Lines.TryGetValue(c.Id, out int line) && line > 0 ? $"{file.Source}:{line}: " : "";
 
         // The candidate's own data, as the network's rules see it in place of the transformer.
-        if (CandidateProblem(c) is string problem) return assessment with { Reasons = [$"{where}{problem}"] };
+        if (CandidateProblem(c) is string problem) return assessment with { Reasons = [new(BankConstraint.CandidateData, $"{where}{problem}")] };
         Transformer bank = original with
         {
             Mva = c.Mva, Units = c.Units, ZPercent = c.ZPercent, Xr = c.Xr ?? XOverRFromLoadLoss(c), Z0Percent = null,
@@ -206,7 +206,7 @@ internal static class BankChoice
         }
         catch (InputException e)
         {
-            return assessment with { Reasons = [$"{where}the candidate's data: {e.Message.Replace("\n  ", "; ")}"] };
+            return assessment with { Reasons = [new(BankConstraint.CandidateData, $"{where}the candidate's data: {e.Message.Replace("\n  ", "; ")}")] };
         }
 
         // 1. Voltage band: the tap study, or the regulated load flow for an on-load changer.
@@ -228,7 +228,7 @@ internal static class BankChoice
             else
             {
                 margin = taps.Closest?.MarginPu;
-                reasons.Add(BandReason(taps, request));
+                reasons.Add(new(BankConstraint.VoltageBand, BandReason(taps, request)));
             }
             if (bestTap is int p && p != c.Tap.Position)
             {
@@ -243,7 +243,7 @@ internal static class BankChoice
         {
             (string, string) holder = c.Tap?.Regulate is not null ? ("the on-load changer cannot hold", "in") : ("with no tap range the bank leaves", "outside");
             (margin, string? failure) = RegulatedMargin(candidate, request, scenarios, original, holder, cancel);
-            if (failure is not null) reasons.Add(failure);
+            if (failure is not null) reasons.Add(new(BankConstraint.VoltageBand, failure));
         }
 
         // 2. Loading and losses of the bank in each scenario at its chosen position.
@@ -261,7 +261,7 @@ internal static class BankChoice
             if (flow.LoadingPercent > 100)
                 intactOver[s?.Name ?? ""] = flow.LoadingPercent.Value;
             if (flow.LoadingPercent > 100)
-                reasons.Add($"{original.Id} loaded {Show(flow.LoadingPercent.Value, 0)} % of its {Show(c.Mva * c.Units, 1)} MVA {Case(s)}");
+                reasons.Add(new(BankConstraint.Loading, $"{original.Id} loaded {Show(flow.LoadingPercent.Value, 0)} % of its {Show(c.Mva * c.Units, 1)} MVA {Case(s)}"));
         }
 
         // 3. Fault duty at the bank's buses and at the buses it feeds.
@@ -275,7 +275,7 @@ internal static class BankChoice
             if (duty is null || pct > duty) (duty, dutyBreaker) = (pct, d.Id);
             foreach (DutyCheck check in d.Checks.Where(x => x.Status == DutyStatus.Over && x.DutyPercent is not null))
                 if (!existingOver.ContainsKey(DutyKey(d, check)))
-                    reasons.Add($"{d.Id} {CheckName(check.Check)} duty {Show(check.DutyPercent!.Value, 0)} %");
+                    reasons.Add(new(BankConstraint.BreakerDuty, $"{d.Id} {CheckName(check.Check)} duty {Show(check.DutyPercent!.Value, 0)} %"));
         }
 
         // 4. Outages of the bank and of the branches at its buses: the bank, its parallel units and the lines it feeds stay within rating.
@@ -285,14 +285,14 @@ internal static class BankChoice
             if (!o.Converged)
             {
                 if (!existing.Contains(OutageKey(o.Scenario, o.Element)))
-                    reasons.Add($"with {o.Element} out the load flow does not converge {Case(o.Scenario)}");
+                    reasons.Add(new(BankConstraint.Outage, $"with {o.Element} out the load flow does not converge {Case(o.Scenario)}"));
                 continue;
             }
             foreach ((string branch, double pct) in o.Judged)
             {
                 if (pct > (n1 ?? double.NegativeInfinity)) (n1, n1Case) = (pct, $"{o.Element} out, {branch} {Case(o.Scenario)}");
                 bool alreadyIntact = branch == original.Id && intactOver.TryGetValue(o.Scenario ?? "", out double before) && pct <= before + 1;
-                if (pct > 100 && !alreadyIntact) reasons.Add($"with {o.Element} out {branch} is loaded {Show(pct, 0)} % {Case(o.Scenario)}");
+                if (pct > 100 && !alreadyIntact) reasons.Add(new(BankConstraint.Outage, $"with {o.Element} out {branch} is loaded {Show(pct, 0)} % {Case(o.Scenario)}"));
             }
         }
 

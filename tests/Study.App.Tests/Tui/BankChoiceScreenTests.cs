@@ -88,8 +88,8 @@ public sealed class BankChoiceScreenTests : IDisposable
         Assert.Equal(BankConstraint.VoltageBand, ChooseBinding.Of(c with { MarginPu = 0.004 }, r).Constraint);
         // A duty already over with the existing bank does not bind the choice.
         Assert.Equal(BankConstraint.Outage, ChooseBinding.Of(c with { MaxDutyPercent = 118 }, r).Constraint);
-        Assert.Equal(BankConstraint.VoltageBand, ChooseBinding.Of(c with { Reasons = ["no tap position holds CQ11 in 0.97–1.03"] }, r).Constraint);
-        Assert.Equal(BankConstraint.Outage, ChooseBinding.Of(c with { Reasons = ["with RING-2 out RING-4 is loaded 101 %"] }, r).Constraint);
+        Assert.Equal(BankConstraint.VoltageBand, ChooseBinding.Of(c with { Reasons = [new(BankConstraint.VoltageBand, "no tap position holds CQ11 in 0.97–1.03")] }, r).Constraint);
+        Assert.Equal(BankConstraint.Outage, ChooseBinding.Of(c with { Reasons = [new(BankConstraint.Outage, "with RING-2 out RING-4 is loaded 101 %")] }, r).Constraint);
     }
 
     [Fact]

@@ -66,7 +66,9 @@ public sealed class BankChoiceTests
         // 30 % and no taps: about 0.08 pu of drop at 10 MW + 3 Mvar, below the board's 0.95.
         var weak = Good("WEAK") with { ZPercent = 30, Tap = null };
         CandidateAssessment a = Only(Choose(Substation(), weak), "WEAK");
-        string reason = Assert.Single(a.Reasons);
+        CandidateReason only = Assert.Single(a.Reasons);
+        Assert.Equal(BankConstraint.VoltageBand, only.Constraint);
+        string reason = only.Text;
         Assert.StartsWith("with no tap range the bank leaves", reason);
         Assert.Contains("outside 0.95–1.05", reason);
         Assert.True(a.MarginPu < 0);
@@ -76,7 +78,7 @@ public sealed class BankChoiceTests
     public void A_unit_with_taps_that_cannot_reach_the_band_names_the_bus_and_the_best_position()
     {
         var weak = Good("WEAK") with { ZPercent = 30, Tap = OffCircuit with { PercentPerStep = 0.5 } };
-        string reason = Assert.Single(Only(Choose(Substation(), weak), "WEAK").Reasons);
+        string reason = Assert.Single(Only(Choose(Substation(), weak), "WEAK").Reasons).Text;
         Assert.StartsWith("no tap position holds ", reason);
         Assert.Contains("(best ", reason);
     }
@@ -87,7 +89,9 @@ public sealed class BankChoiceTests
         // 8 MVA against 10.4 MVA of load; 6 % on 8 MVA is about the impedance in ohms of the 15 MVA unit at 8 %, so band and duty hold.
         var small = Good("SMALL") with { Mva = 8, ZPercent = 6, LoadLossKw = 50 };
         CandidateAssessment a = Only(Choose(Substation(), small), "SMALL");
-        string reason = Assert.Single(a.Reasons);
+        CandidateReason only = Assert.Single(a.Reasons);
+        Assert.Equal(BankConstraint.Loading, only.Constraint);
+        string reason = only.Text;
         Assert.Matches(@"^T loaded 1[23]\d % of its 8\.0 MVA with the loads as entered$", reason);
     }
 
@@ -100,8 +104,9 @@ public sealed class BankChoiceTests
         CandidateAssessment a = Only(r, "STIFF");
         Assert.True(a.Reasons.Count > 0, $"duty {a.MaxDutyPercent}; notes: {string.Join("; ", r.Notes)}");
         // One reason per check over its rating, and nothing but breaker checks.
-        Assert.All(a.Reasons, reason => Assert.Matches(@"^CB-LV (breaking|asymmetric breaking|making|short-time) duty \d+ %$", reason));
-        Assert.Contains(a.Reasons, reason => reason.StartsWith("CB-LV breaking duty"));
+        Assert.All(a.Reasons, reason => Assert.Matches(@"^CB-LV (breaking|asymmetric breaking|making|short-time) duty \d+ %$", reason.Text));
+        Assert.Contains(a.Reasons, reason => reason.Text.StartsWith("CB-LV breaking duty"));
+        Assert.All(a.Reasons, reason => Assert.Equal(BankConstraint.BreakerDuty, reason.Constraint));
         Assert.True(a.MaxDutyPercent > 100);
     }
 
@@ -122,7 +127,9 @@ public sealed class BankChoiceTests
         // 8 MVA at 8 % beside a 15 MVA unit: about a third of the load intact, all of it with T2 out.
         var half = Good("HALF") with { Mva = 8, ZPercent = 8, LoadLossKw = 50 };
         CandidateAssessment a = Only(Choose(Substation(parallel: true, breakerKa: 25), half), "HALF");
-        string reason = Assert.Single(a.Reasons);
+        CandidateReason only = Assert.Single(a.Reasons);
+        Assert.Equal(BankConstraint.Outage, only.Constraint);
+        string reason = only.Text;
         Assert.Matches(@"^with T2 out T is loaded 1\d\d % with the loads as entered$", reason);
         Assert.StartsWith("T2 out, T", a.N1WorstCase);
         Assert.True(a.N1WorstPct > 100);
@@ -134,7 +141,9 @@ public sealed class BankChoiceTests
         var odd = Good("ODD") with { Xr = 3 };  // 80 kW on 15 MVA at 10 % gives X/R ≈ 18.7
         BankChoiceResult r = StudyCase.Of(Substation()).Choose(Request(),
             new BankCandidates { Candidates = [odd], Source = "offers.json", Lines = new Dictionary<string, int> { ["ODD"] = 7 } });
-        string reason = Assert.Single(Only(r, "ODD").Reasons);
+        CandidateReason only = Assert.Single(Only(r, "ODD").Reasons);
+        Assert.Equal(BankConstraint.CandidateData, only.Constraint);
+        string reason = only.Text;
         Assert.StartsWith("offers.json:7: candidate ODD: xr 3.00 disagrees with its load loss", reason);
         Assert.Null(r.Recommended);
     }

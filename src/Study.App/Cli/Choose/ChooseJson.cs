@@ -11,7 +11,7 @@ public sealed record ChooseJson(string Caution, string Transformer, IReadOnlyLis
     double NoLoadRate, double LoadRate, double? LossLoadFactor, string? Profile, IReadOnlyList<string> Notes)
 {
     public static ChooseJson From(BankChoiceResult r) => new(r.Caution, r.Transformer,
-        r.Candidates.Select(c => new CandidateJson(c.Id, c.Feasible, c.Reasons, c.BestTap, c.OnLoad, c.MarginPu, c.MaxDutyPercent,
+        r.Candidates.Select(c => new CandidateJson(c.Id, c.Feasible, c.Reasons.Select(x => x.Text).ToList(), c.BestTap, c.OnLoad, c.MarginPu, c.MaxDutyPercent,
             c.MaxDutyBreaker, c.N1WorstPct, c.N1WorstCase, c.NoLoadLossKw, c.LoadLossKw, c.PeakLoadLossKw, c.EnergyLossMwh, c.Price,
             c.CapitalisedLosses, c.TotalOwningCost)).ToList(),
         r.Recommended, r.NoLoadRate, r.LoadRate, r.LossLoadFactor, r.ProfileSource, r.Notes);

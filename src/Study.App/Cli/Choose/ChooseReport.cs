@@ -26,7 +26,7 @@ public static class ChooseReport
         if (failing.Count > 0)
         {
             doc.Heading("Why the others fail");
-            doc.List(failing.SelectMany(c => c.Reasons.Select(reason => $"{c.Id}: {reason}")));
+            doc.List(failing.SelectMany(c => c.Reasons.Select(reason => $"{c.Id}: {reason.Text}")));
         }
         if (r.Notes.Count > 0) doc.Heading("Notes").List(r.Notes);
         return doc;

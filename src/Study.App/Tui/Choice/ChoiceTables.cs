@@ -26,7 +26,7 @@ public static class ChoiceTables
         lines.AddRange(ChooseReport.Findings(r));
         lines.Add("◀ the binding constraint: what a bank fails, or where one that meets all has least headroom · ★ recommended");
         foreach (CandidateAssessment c in r.Candidates.Where(c => !c.Feasible))
-            lines.AddRange(c.Reasons.Select(reason => $"{c.Id} fails: {reason}"));
+            lines.AddRange(c.Reasons.Select(reason => $"{c.Id} fails: {reason.Text}"));
         lines.AddRange(r.Notes.Select(n => "Note: " + n));
         return string.Join("\n", lines);
     }
