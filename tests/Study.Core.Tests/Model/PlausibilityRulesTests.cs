@@ -31,6 +31,20 @@ public class PlausibilityRulesTests
     }
 
     [Fact]
+    public void A_small_bank_rated_in_kva_typed_as_mva_is_warned_by_its_lv_current()
+    {
+        // 1.6 MVA at 0.433 kV typed as 1600 MVA: I = S/(√3·U) = 1600/(1.732·0.433) ≈ 2133 kA, no winding carries that;
+        // below the 5000 MVA that any unit tops, so the rating alone would pass.
+        Network net = Clean();
+        net = net with { Transformers = net.Transformers.Change(1, t => t with { Mva = 1600, LvKv = 0.433 }) };
+        ValidationReport report = NetworkValidator.Validate(net);
+        Problem p = report.Problems.Single(x => x.ElementId == "T2" && x.Field == "mva");
+        Assert.Equal(Severity.Warning, p.Severity);
+        Assert.Contains("2133 kA on the lv side", p.Message);
+        Assert.Contains("is it in kVA?", p.Message);
+    }
+
+    [Fact]
     public void A_line_of_one_picohm_per_km_is_warned_as_a_bus_merge_before_any_solve()
     {
         Network net = Clean();

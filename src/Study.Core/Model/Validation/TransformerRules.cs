@@ -76,6 +76,10 @@ internal static class TransformerRules
         Plausibility.Percent(at, "z0Percent", t.Z0Percent);
         if (t.Mva is double mva && double.IsFinite(mva) && mva > LargestUnitMva)
             at.Warning("mva", $"mva {Numbers.Show(mva)} is beyond any transformer unit (the largest are about 2000 MVA): is it in kVA?");
+        else if (t.Mva is double rated && t.LvKv is double lvKv && double.IsFinite(rated) && lvKv > 0
+                 && rated / (Math.Sqrt(3) * lvKv) > LargestWindingKa)
+            at.Warning("mva", $"mva {Numbers.Show(rated)} at {Numbers.Show(lvKv)} kV is a rated current of " +
+                $"{Numbers.Show(Math.Round(rated / (Math.Sqrt(3) * lvKv)))} kA on the lv side, beyond any transformer winding (about {Numbers.Show(LargestWindingKa)} kA at most): is it in kVA?");
         bool swapped = WindingKvRules.Check(at, ", or give the transformer as rPu, xPu and ratio",
             new Winding("hv", "hvKv", t.HvKv, hv), new Winding("lv", "lvKv", t.LvKv, lv));
         if (!swapped) WindingKvRules.CheckOrder(at, "hvKv", t.HvKv, "lvKv", t.LvKv);
@@ -99,6 +103,12 @@ internal static class TransformerRules
 
     /// <summary>Larger than any transformer unit built: a rating this large is kVA typed as MVA.</summary>
     private const double LargestUnitMva = 5000;
+
+    /// <summary>
+    /// Beyond the rated current of any winding (large generator step-up units carry some 40 kA at 20–27 kV):
+    /// a 1.6 MVA 415 V unit typed as 1600 MVA would carry about 2000 kA.
+    /// </summary>
+    private const double LargestWindingKa = 100;
 
     /// <summary>
     /// |z| of the bank on the system base (DEVELOPERS.md, Per-unit rules): z · S_base / (mva · units) ·
