@@ -14,7 +14,7 @@ public static class CompareColumns
 {
     public static ColumnSpec<BusChange> Buses { get; } = new ColumnSpec<BusChange>()
         .Text("id", "bus", b => b.Id)
-        .Number("kv", "", "kV", b => b.Kv, 1, reads: b => Numbers.Fixed(LoadFlowColumns.Stated(b.Kv), 1))
+        .Number("kv", "", "kV", b => b.Kv, 1, reads: b => LoadFlowColumns.BaseKv(b.Kv))
         .CsvOnly("membership", b => Membership(b.Membership))
         .Number("beforePu", "before", "pu", b => b.BeforePu, 4)
         .Number("afterPu", "after", "pu", b => b.AfterPu, 4)

@@ -15,7 +15,7 @@ public static class FaultColumns
         string current = perUnitOnly ? "pu" : "kA", impedance = perUnitOnly ? "pu" : "ohm";
         return new ColumnSpec<ShortCircuitLevel>()
             .Text("bus", "bus", f => f.Bus, namesGroup: true)
-            .Number("kv", "", "kV", f => LoadFlowColumns.Stated(f.Kv), 1)
+            .Number("kv", "", "kV", f => LoadFlowColumns.Stated(f.Kv), 3, reads: f => LoadFlowColumns.BaseKv(f.Kv))
             .Text("type", "type", f => f.Kind.Code())
             .Number(perUnitOnly ? "ikPu" : "ikKa", "I''k", current, f => f.Kv > 0 ? f.IkKa : f.IkPu, 3)
             .Number("skMva", "S''k", "MVA", f => f.SkMva, 1)

@@ -13,7 +13,7 @@ public static class LoadFlowColumns
     public static ColumnSpec<BusResult> Buses(Func<string, string?>? nameOf = null) => new ColumnSpec<BusResult>()
         .Text("id", "bus", b => b.Id)
         .Shown("name", b => Numbers.Text(nameOf?.Invoke(b.Id)))
-        .Number("kv", "base", "kV", b => Stated(b.Kv), 1)
+        .Number("kv", "base", "kV", b => Stated(b.Kv), 3, reads: b => BaseKv(b.Kv))
         .Number("vPu", "V", "pu", b => b.VPu, 4, reads: b => b.Energised ? Numbers.Fixed(b.VPu, 4) + Marks.Padded(b.Violation) : "dead")
         .Number("vKv", "V", "kV", b => b.VKv, 2)
         .Number("angleDeg", "angle", "°", b => b.AngleDeg, 2)
@@ -60,6 +60,9 @@ public static class LoadFlowColumns
 
     /// <summary>A base kV of zero means "not stated": absent, not zero.</summary>
     public static double? Stated(double kv) => kv > 0 ? kv : null;
+
+    /// <summary>A base kV as stated on the nameplate, to the volt: "132", "33", "0.415" (one decimal read 0.415 kV as 0.4).</summary>
+    public static string BaseKv(double kv) => Numbers.UpTo(Stated(kv), 3);
 
     /// <summary>Generation and load the bus does not have read as an empty cell, not as 0.00.</summary>
     private static string Nonzero(double value, int decimals) => Math.Abs(value) < 0.5e-6 ? "" : Numbers.Fixed(value, decimals);

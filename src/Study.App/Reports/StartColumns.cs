@@ -9,7 +9,7 @@ public static class StartColumns
     /// <summary>Every bus: voltage before and during the start, the dip; ★ marks the started motors' buses, • the watched ones.</summary>
     public static ColumnSpec<StartBus> Buses { get; } = new ColumnSpec<StartBus>()
         .Words("id", "bus", b => b.Id, b => b.Id + (b.AtStartedMotor ? " ★" : b.Watched ? " •" : ""))
-        .Number("kv", "base", "kV", b => LoadFlowColumns.Stated(b.Kv), 1)
+        .Number("kv", "base", "kV", b => LoadFlowColumns.Stated(b.Kv), 3, reads: b => LoadFlowColumns.BaseKv(b.Kv))
         .Number("beforePu", "before", "pu", b => b.BeforePu, 4)
         .Number("duringPu", "during", "pu", b => b.DuringPu, 4)
         .Number("dipPercent", "dip", "%", b => b.DipPercent, 2)

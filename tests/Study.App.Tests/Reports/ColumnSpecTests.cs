@@ -23,6 +23,20 @@ public sealed class ColumnSpecTests
     private static readonly Network Demo = DemoNetwork.Read();
 
     [Fact]
+    public void A_base_kV_reads_as_stated_to_the_volt_so_a_415_V_board_is_not_shown_as_0_4_kV()
+    {
+        Assert.Equal("0.415", LoadFlowColumns.BaseKv(0.415));
+        Assert.Equal("132", LoadFlowColumns.BaseKv(132));
+        Assert.Equal("6.6", LoadFlowColumns.BaseKv(6.6));
+        Assert.Equal(Numbers.Blank, LoadFlowColumns.BaseKv(0));
+        // The fault table of the demo names its 415 V board's kV in full.
+        FaultResult f = StudyCase.Of(Demo).Fault(new FaultRequest { Buses = ["CS04"], Kinds = [FaultKind.ThreePhase] });
+        var spec = FaultColumns.Levels(false);
+        int kv = spec.Headings.ToList().IndexOf("kV");
+        Assert.Equal("0.415", spec.ReadableRows(f.Faults)[0][kv]);
+    }
+
+    [Fact]
     public void Load_flow_specs_agree_in_every_output()
     {
         LoadFlowResult r = LoadFlowSolver.Solve(PerUnitModel.Build(Demo, Demo.FindScenario("winter-peak")));
