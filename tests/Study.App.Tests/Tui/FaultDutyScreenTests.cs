@@ -74,8 +74,8 @@ public sealed class FaultDutyScreenTests : IDisposable
         for (int row = 0; row < r.Faults.Count; row++)
             foreach (string h in new[] { "I_b kA", "i_DC kA", "I_b,asym kA", "I_k kA", "I_th kA" })
                 Assert.Equal(cli[row][Array.IndexOf(duty.Headings, h)], levels.RowCells[row][Array.IndexOf(headers, h)]);
-        Assert.Contains("t_min 0.1 s", FaultTables.Heading(r));
-        Assert.Contains("T_k 1 s", FaultTables.Heading(r));
+        Assert.Contains("t_min 0.1 s", FaultTables.Notes(r));
+        Assert.Contains("T_k 1 s", FaultTables.Notes(r));
     }
 
     [Fact]

@@ -86,28 +86,48 @@ public sealed class TrustScreenTests : IDisposable
     }
 
     [Fact]
-    public void At_80x24_the_fault_view_gives_the_caution_every_note_in_full_and_the_levels_table()
+    public void At_80x24_the_fault_view_gives_the_levels_the_rows_and_the_notes_in_full_one_Tab_after_the_breakers()
     {
         using var h = new Headless();
         EditSession session = Demo();
         MainWindow main = h.Main(session);
         FaultResult r = StudyCase.Of(session.Network).Fault(new FaultRequest { Kinds = [FaultKind.ThreePhase, FaultKind.LineToEarth] });
-        string screen = "";
+        string screen = "", notes = "", back = "";
         h.Run(main,
             new Step("the main window", () => true, () =>
             {
                 main.Results.Faults.Show(r, session.Network);
                 main.ShowStudyTab(main.Results.FaultsTab);
             }),
-            new Step("the Faults tab", () => true, () => screen = h.Draw()));
+            new Step("the Faults tab", () => true, () =>
+            {
+                screen = h.Draw();
+                h.Keys(Key.Tab, Key.Tab);
+            }),
+            new Step("the notes", () => true, () =>
+            {
+                notes = h.Draw();
+                h.Keys(Key.Tab.WithShift, Key.Tab.WithShift);
+            }),
+            new Step("the levels again", () => true, () => back = h.Draw()));
 
         string flat = Flatten(screen);
         Assert.Contains("Caution: fault levels", flat);
         Assert.Contains("before equipment is specified, set or energised.", flat);
         Assert.Contains("I''k kA", screen);
-        // At least two buses' rows of levels fit under the notes at 80×24.
-        Assert.True(r.Faults.Select(f => f.Bus).Distinct().Take(2).All(b => screen.Contains($"│{b}", StringComparison.Ordinal)), screen);
-        Assert.DoesNotContain("…", screen.Split('\n')[3..8].Aggregate("", (a, b) => a + b)); // notes wrap, not cut
+        Assert.Contains("breaker", screen);
+        // The notes fold to one row that says they are there, so three buses' levels fit at 80×24.
+        Assert.True(r.Faults.Select(f => f.Bus).Distinct().Take(3).All(b => screen.Contains($"│{b}", StringComparison.Ordinal)), screen);
+        Assert.Contains("▼ method and notes:", screen);
+        Assert.Contains("Tab to read them", screen);
+        // Tab past the breaker table opens them: every note wrapped in full, none cut.
+        string opened = Flatten(notes);
+        foreach (string note in r.Notes)
+            Assert.Contains(note, opened);
+        Assert.Contains("I_th for T_k 1 s", opened);
+        Assert.DoesNotContain("▼ method and notes", notes);
+        Assert.Contains("Caution: fault levels", Flatten(notes));
+        Assert.Equal(Flatten(screen), Flatten(back));
         session.Close();
     }
 

@@ -21,18 +21,23 @@ public static class FaultTables
 
     public static string[] BreakerHeaders => FaultColumns.Checks.Headings;
 
-    /// <summary>How the faults were calculated, then every note and missing datum in full (<see cref="FaultNotes"/>).</summary>
-    public static string Heading(FaultResult r, Network? network = null)
+    /// <summary>The line above the tables: method, level, buses studied and how many breakers are over or near.</summary>
+    public static string Summary(FaultResult r)
     {
         string method = r.Method == FaultMethod.Iec60909 ? "IEC 60909" : "from load flow";
         string level = r.Level == Study.Core.Units.FaultLevel.Max ? "max" : "min";
         int buses = r.Faults.Select(f => f.Bus).Distinct().Count();
         int over = r.Breakers.Count(b => b.Status == DutyStatus.Over), near = r.Breakers.Count(b => b.Status == DutyStatus.Warning);
-        string head = $"{method} {level} · {buses} bus(es) · breakers: {over} over {Marks.Over}, {near} near {Marks.Near}"
-            + (r.PerUnitOnly ? " · kV not stated: per unit only" : "")
-            + $"\nI_b, i_DC, I_b,asym at t_min {Numbers.UpTo(r.TMinS, 3)} s (each breaker at its own opening time) · I_k with the motors left out (far from generators) · I_th for T_k {Numbers.UpTo(r.TkS, 3)} s";
+        return $"{method} {level} · {buses} bus(es) · breakers: {over} over {Marks.Over}, {near} near {Marks.Near}"
+            + (r.PerUnitOnly ? " · kV not stated: per unit only" : "");
+    }
+
+    /// <summary>How the time-dependent currents were taken, then every note and missing datum in full (<see cref="FaultNotes"/>).</summary>
+    public static string Notes(FaultResult r, Network? network = null)
+    {
+        string how = $"I_b, i_DC, I_b,asym at t_min {Numbers.UpTo(r.TMinS, 3)} s (each breaker at its own opening time) · I_k with the motors left out (far from generators) · I_th for T_k {Numbers.UpTo(r.TkS, 3)} s";
         IReadOnlyList<string> notes = FaultNotes.Lines(r, network ?? new Network());
-        return notes.Count == 0 ? head : head + "\n" + string.Join("\n", notes);
+        return notes.Count == 0 ? how : how + "\n" + string.Join("\n", notes);
     }
 
     /// <summary>One row per fault; the bus is named on the first row of its group only, so the groups read as one table per bus.</summary>

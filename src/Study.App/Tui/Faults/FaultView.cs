@@ -1,4 +1,4 @@
-// The Faults tab: the caution fixed at the top, the notes in full, then fault levels and breaker duty.
+// The Faults tab: the caution fixed at the top, a summary line, fault levels and breaker duty, the notes in full below.
 using Study.App.Reports;
 using Study.App.Tui.Shell;
 using Study.Core.Faults;
@@ -10,18 +10,22 @@ using Attr = Terminal.Gui.Drawing.Attribute;
 namespace Study.App.Tui.Faults;
 
 /// <summary>
-/// The caution is its own pane above everything and never scrolls. Under it the heading says how the
-/// faults were calculated and gives every note and missing datum in full (it scrolls when long). The
-/// levels (with the breaking and thermal currents) and every check of every breaker share the rest, the focused table taking two thirds. Breaker rows over
-/// their rating are marked "▲ OVER" (and coloured); rows above 90 % "△ near".
+/// The caution is its own pane above everything and never scrolls; a summary line under it says how the
+/// faults were calculated and how many breakers are over. The levels (with the breaking and thermal
+/// currents) and every check of every breaker share the rows, the focused table taking two thirds. Below
+/// them, how the time-dependent currents were taken and every note and missing datum in full: shown
+/// whole when they fit in a quarter of the tab; otherwise folded to one row that says how many lines
+/// wait there, and opened (up to two thirds of the tab, scrolling) when Tab reaches them. Breaker rows
+/// over their rating are marked "▲ OVER" (and coloured); rows above 90 % "△ near".
 /// </summary>
 public sealed class FaultView : View
 {
     private const string NotYet = "No fault study yet: F7 asks where and which faults.";
     private readonly TextPane caution = new() { CanFocus = false, Content = CautionText(FaultStudy.Caution) };
-    private readonly TextPane heading = new() { CanFocus = false, Content = NotYet };
+    private readonly TextPane summary = new() { CanFocus = false, Content = NotYet };
     private readonly ResultTable levels = new(FaultTables.LevelHeaders);
     private readonly ResultTable breakers = new(FaultTables.BreakerHeaders);
+    private readonly TextPane notes = new() { CanFocus = false, FoldLabel = "method and notes" };
     private FaultResult? result;
     private IReadOnlyList<DutyCheck> checks = [];
 
@@ -31,16 +35,31 @@ public sealed class FaultView : View
         Height = Dim.Fill();
         CanFocus = true;
         caution.Height = Dim.Func(_ => Wrapped(caution));
-        heading.Y = Pos.Bottom(caution);
-        heading.Height = Dim.Func(_ => Math.Min(HeadingRows, Wrapped(heading)));
-        levels.Y = Pos.Bottom(heading);
-        Add(caution, heading, levels, breakers);
-        FocusSplit.Stack(this, levels, breakers, () => Viewport.Height - caution.Frame.Height - heading.Frame.Height);
+        summary.Y = Pos.Bottom(caution);
+        summary.Height = Dim.Func(_ => Math.Min(2, Wrapped(summary)));
+        levels.Y = Pos.Bottom(summary);
+        notes.Y = Pos.AnchorEnd();
+        notes.Height = Dim.Func(_ => NotesRows);
+        Add(caution, summary, levels, breakers, notes);
+        FocusSplit.Stack(this, levels, breakers, () => Room - NotesRows);
+        breakers.Height = Dim.Func(_ => Math.Max(0, Room - NotesRows - levels.Frame.Height));
+        notes.HasFocusChanged += (_, _) => SetNeedsLayout();
         breakers.RowScheme = BreakerScheme;
     }
 
-    /// <summary>Rows the heading may take before it scrolls: a third of the tab, at least two.</summary>
-    private int HeadingRows => Math.Max(2, Viewport.Height / 3);
+    /// <summary>Rows under the caution and the summary, for the tables and the notes.</summary>
+    private int Room => Math.Max(0, Viewport.Height - caution.Frame.Height - summary.Frame.Height);
+
+    /// <summary>The notes whole when they fit in a quarter of the room; else one folded row, or two thirds while being read.</summary>
+    private int NotesRows
+    {
+        get
+        {
+            int full = notes.Content.Length == 0 ? 0 : Wrapped(notes);
+            if (full <= Math.Max(2, Room / 4)) return full;
+            return notes.HasFocus ? Math.Min(full, Room * 2 / 3) : 1;
+        }
+    }
 
     public FaultResult? Result
     {
@@ -54,7 +73,8 @@ public sealed class FaultView : View
         result = value;
         checks = value is null ? [] : FaultTables.Checks(value);
         caution.Content = CautionText(value?.Caution ?? FaultStudy.Caution);
-        heading.Content = value is null ? NotYet : FaultTables.Heading(value, network);
+        summary.Content = value is null ? NotYet : FaultTables.Summary(value);
+        notes.Content = value is null ? "" : FaultTables.Notes(value, network);
         levels.Source = value is null ? TextTableSource.Empty(FaultTables.LevelHeaders) : FaultTables.Levels(value);
         breakers.Source = value is null ? TextTableSource.Empty(FaultTables.BreakerHeaders) : FaultTables.Breakers(value);
         SetNeedsLayout();
@@ -62,7 +82,8 @@ public sealed class FaultView : View
 
     protected override void OnSubViewsLaidOut(LayoutEventArgs args)
     {
-        heading.CanFocus = Wrapped(heading) > heading.Frame.Height;
+        // Tab reaches the notes only when some are hidden; focused, they stay reachable until Tab leaves.
+        notes.CanFocus = notes.HasFocus || Wrapped(notes) > notes.Frame.Height;
         base.OnSubViewsLaidOut(args);
     }
 

@@ -4,7 +4,11 @@ using Terminal.Gui.ViewBase;
 
 namespace Study.App.Tui.Shell;
 
-/// <summary>Shows text wrapped to the width; arrows and PgUp/PgDn scroll when it has focus.</summary>
+/// <summary>
+/// Shows text wrapped to the width; arrows and PgUp/PgDn scroll when it has focus. With a
+/// <see cref="FoldLabel"/>, text that does not fit says so on its last row while the pane lacks focus
+/// ("▼ Method and notes: 6 more lines, Tab to read them"), so nothing is hidden in silence.
+/// </summary>
 public sealed class TextPane : View
 {
     private string content = "";
@@ -15,6 +19,9 @@ public sealed class TextPane : View
         Height = Dim.Fill();
         CanFocus = true;
     }
+
+    /// <summary>What the text is, for the row that says more lines are hidden; null draws no such row.</summary>
+    public string? FoldLabel { get; set; }
 
     public string Content
     {
@@ -61,14 +68,31 @@ public sealed class TextPane : View
         IReadOnlyList<string> lines = Wrap(content, Viewport.Width);
         SetContentSize(new System.Drawing.Size(Viewport.Width, Math.Max(lines.Count, 1)));
         SetAttributeForRole(Terminal.Gui.Drawing.VisualRole.Normal);
+        int hidden = lines.Count - Viewport.Y - Viewport.Height;
+        bool fold = FoldLabel is not null && !HasFocus && hidden > 0;
         for (int row = 0; row < Viewport.Height; row++)
         {
             int i = row + Viewport.Y;
             string line = i < lines.Count ? lines[i] : "";
+            if (fold && row == Viewport.Height - 1)
+                line = FoldRow(FoldLabel!, hidden + 1, Viewport.Height > 1, Viewport.Width);
             Move(0, row);
             AddStr(line.PadRight(Viewport.Width));
         }
         return true;
+    }
+
+    /// <summary>The last row of folded text: what it is and how many lines Tab shows, cut to the width.</summary>
+    public static string FoldRow(string label, int lines, bool someShown, int width)
+    {
+        string row = $"▼ {label}: {lines} {(someShown ? "more " : "")}line{(lines == 1 ? "" : "s")}, Tab to read them";
+        return row.Length <= width ? row : row[..Math.Max(0, width - 1)] + "…";
+    }
+
+    protected override void OnHasFocusChanged(bool newHasFocus, View? previousFocusedView, View? view)
+    {
+        SetNeedsDraw();
+        base.OnHasFocusChanged(newHasFocus, previousFocusedView, view);
     }
 
     protected override bool OnKeyDown(Key key)
