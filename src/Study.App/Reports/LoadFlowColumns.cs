@@ -15,7 +15,7 @@ public static class LoadFlowColumns
         .Shown("name", b => Numbers.Text(nameOf?.Invoke(b.Id)))
         .Number("kv", "base", "kV", b => Stated(b.Kv), 3, reads: b => BaseKv(b.Kv))
         .Number("vPu", "V", "pu", b => b.VPu, 4, reads: b => b.Energised ? Numbers.Fixed(b.VPu, 4) + Marks.Padded(b.Violation) : "dead")
-        .Number("vKv", "V", "kV", b => b.VKv, 2)
+        .Number("vKv", "V", "kV", b => b.VKv, 2, reads: b => Numbers.Fixed(b.VKv, b.Kv is > 0 and < 1 ? 3 : 2))
         .Number("angleDeg", "angle", "°", b => b.AngleDeg, 2)
         .Shown("band pu", b => $"{Numbers.Fixed(b.VMin, 2)}–{Numbers.Fixed(b.VMax, 2)}", Align.Right)
         .Number("pGenMw", "P gen", "MW", b => b.PGenMw, 2, reads: b => Nonzero(b.PGenMw, 2))
@@ -63,6 +63,8 @@ public static class LoadFlowColumns
 
     /// <summary>A base kV as stated on the nameplate, to the volt: "132", "33", "0.415" (one decimal read 0.415 kV as 0.4).</summary>
     public static string BaseKv(double kv) => Numbers.UpTo(Stated(kv), 3);
+
+    // V kV takes a third decimal below 1 kV, so a 415 V board reads 0.403, not 0.40 (to the volt, as the base does).
 
     /// <summary>Generation and load the bus does not have read as an empty cell, not as 0.00.</summary>
     private static string Nonzero(double value, int decimals) => Math.Abs(value) < 0.5e-6 ? "" : Numbers.Fixed(value, decimals);

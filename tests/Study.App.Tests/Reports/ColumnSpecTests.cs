@@ -34,6 +34,12 @@ public sealed class ColumnSpecTests
         var spec = FaultColumns.Levels(false);
         int kv = spec.Headings.ToList().IndexOf("kV");
         Assert.Equal("0.415", spec.ReadableRows(f.Faults)[0][kv]);
+        // And its load-flow voltage to the volt: V kV = V pu × 0.415 with three decimals.
+        LoadFlowResult lf = LoadFlowSolver.Solve(PerUnitModel.Build(Demo));
+        BusResult cs04 = lf.Buses.Single(b => b.Id == "CS04");
+        var buses = LoadFlowColumns.Buses();
+        string[] row = buses.ReadableRows([cs04])[0];
+        Assert.Equal((cs04.VPu * 0.415).ToString("F3", System.Globalization.CultureInfo.InvariantCulture), row[buses.Headings.ToList().IndexOf("V kV")]);
     }
 
     [Fact]
