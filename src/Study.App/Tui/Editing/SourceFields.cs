@@ -27,6 +27,7 @@ public static class SourceFields
         Field.Number<Generator>("P", "MW", 0, e => e.PMw, (e, v) => e with { PMw = v }).Keyed("pMw"),
         Field.Number<Generator>("Q", "Mvar", 0, e => e.QMvar, (e, v) => e with { QMvar = v }).Keyed("qMvar"),
         Field.Number<Generator>("Vset", "pu", 1, e => e.VSet, (e, v) => e with { VSet = v }).Keyed("vSet"),
+        Field.Optional<Generator>("Angle (slack)", "°", "0", e => e.AngleDeg, (e, v) => e with { AngleDeg = v }).Keyed("angleDeg"),
         Field.Optional<Generator>("Qmin", "Mvar", "none", e => e.QMinMvar, (e, v) => e with { QMinMvar = v }).Keyed("qMinMvar"),
         Field.Optional<Generator>("Qmax", "Mvar", "none", e => e.QMaxMvar, (e, v) => e with { QMaxMvar = v }).Keyed("qMaxMvar"),
         Field.Optional<Generator>("Rating", "MVA", "", e => e.Mva, (e, v) => e with { Mva = v }).Keyed("mva"),
