@@ -37,6 +37,20 @@ public sealed class EditSessionTests : IDisposable
     }
 
     [Fact]
+    public void Replacing_an_element_with_an_equal_one_is_no_edit()
+    {
+        EditSession s = SavedSession(out _);
+        Network before = s.Network;
+        Load load = before.Loads.Single(l => l.Id == "L1");
+        Assert.False(s.Replace(ElementKind.Load, "L1", load with { })); // a copy, equal field by field
+        Assert.Same(before, s.Network);
+        Assert.False(s.CanUndo);
+        Assert.False(s.Dirty);
+        Assert.True(s.Replace(ElementKind.Load, "L1", load with { PMw = load.PMw + 1 }));
+        Assert.Equal("edit load L1", s.UndoName);
+    }
+
+    [Fact]
     public void An_id_already_used_in_the_family_is_refused()
     {
         EditSession s = SavedSession(out _);

@@ -7,14 +7,17 @@ namespace Study.App.Tui.Compare;
 /// <summary>The before and after cases, as chosen; <see cref="Build"/> checks the choice against the network.</summary>
 public sealed class CompareForm(Network network, string? activeScenario, string? path)
 {
-    /// <summary>The before network file when <see cref="BeforeIsFile"/>: "x-before.study.json" beside "x.study.json" when there is one.</summary>
+    /// <summary>
+    /// The before network file when <see cref="BeforeIsFile"/>: "x-before.study.json" beside "x.study.json"
+    /// when there is one, else the network's own file as saved (the network before the edits since).
+    /// </summary>
     public string BeforePath { get; set; } = SuggestedBefore(path);
 
     /// <summary>
     /// True: the before case is another network file (the network before a change), solved in
     /// <see cref="AfterScenario"/> too. Chosen at first when a before file lies beside the network.
     /// </summary>
-    public bool BeforeIsFile { get; set; } = File.Exists(SuggestedBefore(path));
+    public bool BeforeIsFile { get; set; } = path is not null && File.Exists(BeforeFileBeside(path));
 
     /// <summary>Scenario names; null is the case as entered.</summary>
     public string? BeforeScenario { get; set; } = activeScenario;
@@ -41,14 +44,20 @@ public sealed class CompareForm(Network network, string? activeScenario, string?
         return (new CompareRequest(null, BeforeScenario, AfterScenario), null);
     }
 
-    /// <summary>"x-before.study.json" beside "x.study.json" when it exists (the demo pair), else the folder.</summary>
+    /// <summary>"x-before.study.json" beside "x.study.json" when it exists (the demo pair), else the network's file, else the folder.</summary>
     private static string SuggestedBefore(string? path)
     {
         if (path is null) return Directory.GetCurrentDirectory() + Path.DirectorySeparatorChar;
+        string beside = BeforeFileBeside(path);
+        if (File.Exists(beside)) return beside;
+        return File.Exists(path) ? path : (Path.GetDirectoryName(path) ?? "") + Path.DirectorySeparatorChar;
+    }
+
+    private static string BeforeFileBeside(string path)
+    {
         string name = Path.GetFileName(path);
         string stem = name.EndsWith(".study.json", StringComparison.OrdinalIgnoreCase) ? name[..^".study.json".Length] : Path.GetFileNameWithoutExtension(name);
-        string candidate = Path.Combine(Path.GetDirectoryName(path) ?? "", stem + "-before.study.json");
-        return File.Exists(candidate) ? candidate : (Path.GetDirectoryName(path) ?? "") + Path.DirectorySeparatorChar;
+        return Path.Combine(Path.GetDirectoryName(path) ?? "", stem + "-before.study.json");
     }
 }
 

@@ -113,16 +113,21 @@ public sealed class EditSession
         Apply(ElementLists.Add(Network, kind, element), $"add {ElementKinds.Label(kind)} {id}");
     }
 
-    /// <summary>Replaces an element; renaming a bus renames every reference to it as well.</summary>
-    public void Replace(ElementKind kind, string id, object element)
+    /// <summary>
+    /// Replaces an element; renaming a bus renames every reference to it as well. An element equal to the
+    /// one it replaces is no edit: nothing changes, no undo entry is made, and the result is false.
+    /// </summary>
+    public bool Replace(ElementKind kind, string id, object element)
     {
-        if (ElementLists.Find(Network, kind, id) is null) throw new ArgumentException($"no {ElementKinds.Label(kind)} '{id}'");
+        object current = ElementLists.Find(Network, kind, id) ?? throw new ArgumentException($"no {ElementKinds.Label(kind)} '{id}'");
+        if (current.Equals(element)) return false;
         string newId = ElementLists.Of(kind).IdOf(element);
         if (!ElementLists.IsIdFree(Network, kind, newId, except: id))
             throw new ArgumentException($"id '{newId}' is already used");
         Network next = ElementLists.Replace(Network, kind, id, element);
         if (kind == ElementKind.Bus && newId != id) next = BusReferences.Rename(next, id, newId);
         Apply(next, $"edit {ElementKinds.Label(kind)} {id}" + (newId != id ? $" (renamed {newId})" : ""));
+        return true;
     }
 
     /// <summary>Elements that would be left dangling by deleting this element (only buses are referenced).</summary>

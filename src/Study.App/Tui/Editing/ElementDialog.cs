@@ -29,7 +29,6 @@ public sealed class ElementDialog : Dialog
     private readonly TextPane findings;
     private readonly Label status;
     private FormState state;
-    private bool discardConfirmed;
 
     public ElementDialog(IApplication app, ElementForm form)
     {
@@ -155,8 +154,7 @@ public sealed class ElementDialog : Dialog
             Refuse();
             return true;
         }
-        if (!form.Changed || discardConfirmed) return base.OnIsRunningChanging(oldIsRunning, newIsRunning);
-        app.Invoke(AskDiscard);
+        if (!form.Changed || AskDiscard()) return base.OnIsRunningChanging(oldIsRunning, newIsRunning);
         return true;
     }
 
@@ -169,15 +167,9 @@ public sealed class ElementDialog : Dialog
         status.Text = $"Not accepted: {first["error: ".Length..]}";
     }
 
-    private void AskDiscard()
-    {
-        // Keep editing is the default: Enter after a stray Esc loses nothing.
-        int? answer = Prompts.Ask(app, "Discard changes?", $"{form.Title}: the fields you changed will be lost.\n\nD discards them · Enter or Esc keeps editing.", "Discard", "Keep editing");
-        if (answer != 0) return;
-        discardConfirmed = true;
-        Result = null;
-        RequestStop();
-    }
+    /// <summary>True when the user chose to discard the changed fields; Enter (the default) and Esc keep editing.</summary>
+    private bool AskDiscard() =>
+        Prompts.Ask(app, "Discard changes?", $"{form.Title}: the fields you changed will be lost.\n\nD discards them · Enter or Esc keeps editing.", "_Discard", "Keep editing") == 0;
 
     private static string Fit(string s, int width) => s.Length <= width ? s : s[..(width - 1)] + "…";
 }

@@ -60,20 +60,25 @@ public sealed class ElementForm
         var problems = new List<string>();
         var bad = new SortedSet<int>();
         object element = start;
-        for (int i = 0; i < Fields.Count; i++)
+        // An existing element whose texts are as they opened is the element itself: writing the texts back
+        // would round values finer than a field shows and make an edit of a form nobody changed.
+        if (OriginalId is null || Changed)
         {
-            try
+            for (int i = 0; i < Fields.Count; i++)
             {
-                element = Fields[i].Write(element, Texts[i]);
+                try
+                {
+                    element = Fields[i].Write(element, Texts[i]);
+                }
+                catch (FormatException e)
+                {
+                    problems.Add("error: " + e.Message);
+                    bad.Add(i);
+                }
             }
-            catch (FormatException e)
-            {
-                problems.Add("error: " + e.Message);
-                bad.Add(i);
-            }
+            if (problems.Count > 0) return new FormState(null, problems, [], bad.ToList());
+            element = ElementFields.Finish(Kind, element);
         }
-        if (problems.Count > 0) return new FormState(null, problems, [], bad.ToList());
-        element = ElementFields.Finish(Kind, element);
 
         string id = ElementLists.Of(Kind).IdOf(element);
         if (!ElementLists.IsIdFree(network, Kind, id, except: OriginalId))

@@ -105,8 +105,12 @@ public sealed class MainCommands
         ElementKind kind = main.SelectedKind;
         var form = new ElementForm(Session.Network, kind, id);
         if (ElementDialog.Run(App, form) is not { } element) return;
+        if (id is not null && !Session.Replace(kind, id, element))
+        {
+            main.Status.Message = $"no change to {ElementKinds.Label(kind)} {id}";
+            return;
+        }
         if (id is null) Session.Add(kind, element);
-        else Session.Replace(kind, id, element);
         main.Select(kind, ElementLists.Of(kind).IdOf(element));
         main.Status.Message = Session.UndoName;
     }

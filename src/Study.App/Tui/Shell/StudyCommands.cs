@@ -181,7 +181,9 @@ public sealed class StudyCommands(MainWindow main)
         int position = r.Recommended[0].Position;
         if (TapOf(Session.Network, r.Transformer)?.Position == position)
         {
-            Prompts.Tell(App, "Apply tap", $"{r.Transformer} is already on position {Labels.Position(position)}.");
+            string already = $"{r.Transformer} is already on the recommended position {Labels.Position(position)}: nothing was changed";
+            main.Status.Message = already;
+            Prompts.Tell(App, "Apply tap", already + ".");
             return;
         }
         ResultStamp? stamp = main.StampOf(ResultKind.Taps);

@@ -27,7 +27,11 @@ public static class TapStudyTables
             string also = r.Recommended.Count > 1
                 ? "; also " + string.Join(", ", r.Recommended.Skip(1).Take(4).Select(x => $"{Labels.Position(x.Position)} ({Numbers.Fixed(x.MarginPu, 4)})"))
                 : "";
-            string action = now == best.Position ? "set to the recommended position (Alt+Z undoes)" : $"Alt+P sets {Labels.Position(best.Position)}";
+            // On the recommended position now: set there since the study (Alt+P, or an edit), or on it already when studied.
+            int current = now ?? r.FilePosition;
+            string action = current != best.Position ? $"Alt+P sets {Labels.Position(best.Position)}"
+                : r.FilePosition == best.Position ? "already on the recommended position: nothing to change"
+                : "set to the recommended position (Alt+Z undoes)";
             lines.Add($"{r.Transformer} recommended {Labels.Position(best.Position)} (worst margin {Numbers.Fixed(best.MarginPu, 4)} pu){also} · {stands} · {action}");
         }
         else if (r.Closest is { } c)
