@@ -24,6 +24,27 @@ public sealed class FormAndResultTests
     }
 
     [Fact]
+    public void Editing_one_field_keeps_the_digits_of_the_others_a_per_unit_line_from_an_imported_file_included()
+    {
+        Network n = SampleNetwork.Build();
+        Line original = n.Lines.Single(l => l.Id == "F1");
+        var fine = new SequenceImpedance { Per = ImpedanceBasis.PerUnit, R = 0.0003691602410247061, X = 0.002953281928197649, B = 1.2345678901e-7 };
+        n = n with { Lines = n.Lines.Select(l => l.Id == "F1" ? l with { Z1 = fine } : l).ToList() };
+        var form = new ElementForm(n, ElementKind.Line, "F1");
+        int rating = form.Fields.ToList().FindIndex(f => f.Key == "ratingMva");
+        form.Texts[rating] = "25";
+        FormState state = form.Evaluate();
+        Assert.True(state.CanAccept, string.Join("; ", state.Problems));
+        SequenceImpedance z1 = ((Line)state.Element!).Z1!;
+        Assert.Equal(25, ((Line)state.Element!).RatingMva);
+        // Twelve significant digits: what is written back differs from the file by less than 1e-11 of itself.
+        Assert.Equal(fine.R, z1.R, fine.R * 1e-11);
+        Assert.Equal(fine.X, z1.X, fine.X * 1e-11);
+        Assert.Equal(fine.B!.Value, z1.B!.Value, fine.B.Value * 1e-11);
+        Assert.NotEqual(original.RatingMva, 25);
+    }
+
+    [Fact]
     public void A_form_with_text_in_a_number_field_cannot_be_accepted_and_says_why()
     {
         var form = new ElementForm(SampleNetwork.Build(), ElementKind.Bus, "B11");

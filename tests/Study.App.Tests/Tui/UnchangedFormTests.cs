@@ -64,12 +64,12 @@ public sealed class UnchangedFormTests : IDisposable
     [Fact]
     public void A_value_finer_than_the_field_shows_is_kept_when_the_form_is_accepted_unchanged()
     {
-        // 0.123456789 shows as 0.123457 in the text field; accepting the form must not write that back.
+        // 0.1234567890123456 shows as 0.123456789012 (twelve significant digits); accepting the form must not write that back.
         Network n = DemoNetwork.Read();
-        Load load = n.Loads[0] with { QMvar = 0.123456789 };
+        Load load = n.Loads[0] with { QMvar = 0.1234567890123456 };
         n = ElementLists.Replace(n, ElementKind.Load, load.Id, load);
         var form = new ElementForm(n, ElementKind.Load, load.Id);
-        Assert.Equal("0.123457", form.Texts[NodeFields.Load.ToList().FindIndex(f => f.Name == "Q")]);
+        Assert.Equal("0.123456789012", form.Texts[NodeFields.Load.ToList().FindIndex(f => f.Name == "Q")]);
         Assert.Same(load, form.Evaluate().Element);
     }
 }

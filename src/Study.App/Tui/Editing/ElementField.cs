@@ -39,7 +39,12 @@ public static class Field
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    public static string Format(double value) => value.ToString("0.######", Inv);
+    /// <summary>
+    /// A value as the form shows it and writes it back: twelve significant digits, so a value from an
+    /// imported or generated file (r = 0.0003691602 pu) keeps its digits when another field of the form is
+    /// edited; six decimals rounded it to 0.000369, and a 1e-7 pu value to 0.
+    /// </summary>
+    public static string Format(double value) => value.ToString("G12", Inv);
 
     public static ElementField Id<T>(string name, Func<T, string> get, Func<T, string, T> set) =>
         new(name, "", "", e => get((T)e), (e, text) =>
