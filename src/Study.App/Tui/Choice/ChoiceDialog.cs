@@ -18,7 +18,7 @@ public static class ChoiceDialog
     public static Dialog Build(ChoiceForm form, out Label status, out Action read, out View first)
     {
         var dialog = new Dialog { Title = "Bank choice", Width = Dim.Percent(94), Height = Dim.Percent(94) };
-        const int at = 15;
+        const int at = 18;
         var transformer = new OptionSelector
         {
             X = at, Y = 0, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
@@ -42,8 +42,8 @@ public static class ChoiceDialog
         dialog.Add(
             new Label { X = 0, Y = 0, Text = "Transformer" }, transformer,
             new Label { X = 0, Y = 1, Text = "Candidates" }, candidates,
-            new Label { X = 0, Y = 2, Text = "Loss-load" }, factor,
-            new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "factor 0..1, or a profile below (one of the two)" },
+            new Label { X = 0, Y = 2, Text = "Loss-load factor" }, factor,
+            new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "0..1, or a profile CSV below (one of the two)" },
             new Label { X = 0, Y = 3, Text = "Profile CSV" }, profile,
             new Label { X = 0, Y = 4, Text = "No-load A" }, noLoad,
             new Label { X = at + 11, Y = 4, Text = "Load B" }, load,

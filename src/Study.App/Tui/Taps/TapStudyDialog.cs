@@ -20,7 +20,7 @@ public static class TapStudyDialog
         var bandHint = new Label { X = 37, Y = 0, Width = Dim.Fill(), Text = "blank: each bus's own band" };
         var watchLabel = new Label { X = 0, Y = 2, Text = "Watch buses" };
         var watch = new TextField { X = 14, Y = 2, Width = Dim.Fill(), Text = form.WatchText };
-        var watchHint = new Label { X = 14, Y = 3, Width = Dim.Fill(), Text = "ids by comma; blank: the lv bus and the buses its lines feed" };
+        var watchHint = new Label { X = 14, Y = 3, Width = Dim.Fill(), Text = "ids by comma; blank: the lv bus and the buses it feeds" };
         var scenLabel = new Label { X = 0, Y = 5, Text = "Scenarios" };
         var scenarios = new OptionSelector
         {
