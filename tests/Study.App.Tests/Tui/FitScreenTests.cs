@@ -1,7 +1,9 @@
 // At 80×24 nothing a user must read is cut at an edge: menus with their descriptions and keys, the
-// study dialogs with every label and option.
+// study dialogs with every label and option, the edit forms with every label, hint and per-unit step.
+using System.Text.RegularExpressions;
 using Study.App.Tui.Editing;
 using Study.App.Tui.Shell;
+using Study.Core.Model;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
@@ -135,5 +137,86 @@ public sealed class FitScreenTests : IDisposable
         Assert.Equal(dialogs, seen.Count);
         foreach (var (_, texts, screen) in seen) AssertShownWhole(texts, screen);
         session.Close();
+    }
+
+    /// <summary>A form editing the kind's first element on the demo; for a kind the demo lacks, one is made and added first.</summary>
+    private static ElementForm FormOf(Network n, ElementKind kind)
+    {
+        if (ElementLists.Ids(n, kind).FirstOrDefault() is { } id) return new ElementForm(n, kind, id);
+        var add = new ElementForm(n, kind, null);
+        // An invented 132/33/11 kV three-winding bank, enough data for its per-unit steps.
+        foreach (var (key, text) in new[] { ("hv", "WRB132"), ("mv", "WRB33"), ("lv", "CQ11"), ("hvKv", "132"), ("mvKv", "33"), ("lvKv", "11"),
+                     ("mvaHv", "40"), ("mvaMv", "40"), ("mvaLv", "20"), ("zHmPercent", "12"), ("zHlPercent", "18"), ("zMlPercent", "6"), ("zBaseMva", "40") })
+            if (add.FieldOf(key) is int field) add.Texts[field] = text;
+        object element = add.Evaluate().Element ?? throw new InvalidOperationException(string.Join("; ", add.Evaluate().Problems));
+        return new ElementForm(ElementLists.Add(n, kind, element), kind, ElementLists.Of(kind).IdOf(element));
+    }
+
+    /// <summary>The form at 80×24 with each field in turn focused (the fields scroll to it), one screen per field.</summary>
+    private static List<string> ScreensOf(ElementForm form)
+    {
+        using var h = new Headless();
+        var dialog = new ElementDialog(h.App, form);
+        var screens = new List<string>();
+        h.Run(dialog, new Step("the form", () => true, () =>
+        {
+            foreach (TextField text in dialog.Texts)
+            {
+                text.SetFocus();
+                screens.Add(h.Draw());
+            }
+        }));
+        return screens;
+    }
+
+    [Theory]
+    [InlineData(ElementKind.Bus)]
+    [InlineData(ElementKind.Supply)]
+    [InlineData(ElementKind.Generator)]
+    [InlineData(ElementKind.Load)]
+    [InlineData(ElementKind.Shunt)]
+    [InlineData(ElementKind.Line)]
+    [InlineData(ElementKind.Transformer)]
+    [InlineData(ElementKind.ThreeWindingTransformer)]
+    [InlineData(ElementKind.Motor)]
+    [InlineData(ElementKind.Breaker)]
+    [InlineData(ElementKind.Scenario)]
+    public void Each_edit_form_at_80x24_shows_every_label_and_hint_whole_and_its_per_unit_steps_in_labels(ElementKind kind)
+    {
+        ElementForm form = FormOf(DemoNetwork.Read(), kind);
+        List<string> screens = ScreensOf(form);
+        string[] rows = screens.SelectMany(s => s.Split('\n')).ToArray();
+        foreach (ElementField field in form.Fields)
+        {
+            string hint = ElementDialog.Hint(field);
+            Assert.True(rows.Any(r => r.Contains(field.Header, StringComparison.Ordinal)), $"label '{field.Header}' is cut:\n{screens[^1]}");
+            Assert.True(hint.Length == 0 || rows.Any(r => r.Contains(hint, StringComparison.Ordinal)), $"hint '{hint}' is cut:\n{screens[^1]}");
+        }
+
+        // No number is named by its file key in the working: a camel-case or dotted key ("loadPercent",
+        // "lockedRotor.powerFactor") reads as its label.
+        FormState state = form.Evaluate();
+        if (kind != ElementKind.Scenario) Assert.NotEmpty(state.Preview);
+        foreach (ElementField field in form.Fields.Where(f => f.Numeric && f.Key is { } k && (k.Contains('.') || k.Any(char.IsUpper))))
+        {
+            var key = new Regex($@"(?<![\w.]){Regex.Escape(field.Key!)}(?!\w)");
+            Assert.DoesNotContain(state.Preview, line => key.IsMatch(line));
+        }
+    }
+
+    [Fact]
+    public void The_motor_and_transformer_forms_work_their_per_unit_values_in_labels_with_units()
+    {
+        Network n = DemoNetwork.Read();
+        string motor = ScreensOf(new ElementForm(n, ElementKind.Motor, "M-CS-COMP"))[0];
+        Assert.Contains("load = Running load %", motor);
+        Assert.DoesNotContain("loadPercent", motor);
+        string bank = ScreensOf(new ElementForm(n, ElementKind.Transformer, "CQ-T1"))[0];
+        Assert.Contains("Impedance % / 100", bank);
+        Assert.DoesNotContain("zPercent", bank);
+
+        // The steps name the same numbers the form holds: 10 % on the bank's own base, 0.1 pu.
+        FormState state = new ElementForm(n, ElementKind.Transformer, "CQ-T1").Evaluate();
+        Assert.Contains("z (own base) = Impedance % / 100 = 10 / 100 = 0.1 pu", state.Preview);
     }
 }
