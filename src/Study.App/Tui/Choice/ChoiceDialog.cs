@@ -18,20 +18,20 @@ public static class ChoiceDialog
     public static Dialog Build(ChoiceForm form, out Label status, out Action read, out View first)
     {
         var dialog = new Dialog { Title = "Bank choice", Width = Dim.Percent(94), Height = Dim.Percent(94) };
-        const int at = 15;
+        const int at = 18;
         var transformer = new OptionSelector
         {
             X = at, Y = 0, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
             Labels = form.Transformers.Count == 0 ? ["(none)"] : form.Transformers.ToList(),
             Value = Math.Max(0, form.Transformers.ToList().IndexOf(form.TransformerId)),
         };
-        var candidates = new TextField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
-        var factor = new TextField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
-        var profile = new TextField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
-        var noLoad = new TextField { X = at, Y = 4, Width = 10, Text = form.NoLoadRateText };
-        var load = new TextField { X = at + 20, Y = 4, Width = 10, Text = form.LoadRateText };
-        var low = new TextField { X = at, Y = 5, Width = 8, Text = form.BandLowText };
-        var high = new TextField { X = at + 14, Y = 5, Width = 8, Text = form.BandHighText };
+        var candidates = new EntryField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
+        var factor = new EntryField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
+        var profile = new EntryField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
+        var noLoad = new EntryField { X = at, Y = 4, Width = 10, Text = form.NoLoadRateText };
+        var load = new EntryField { X = at + 20, Y = 4, Width = 10, Text = form.LoadRateText };
+        var low = new EntryField { X = at, Y = 5, Width = 8, Text = form.BandLowText };
+        var high = new EntryField { X = at + 14, Y = 5, Width = 8, Text = form.BandHighText };
         var scenarios = new OptionSelector
         {
             X = at, Y = 6, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
@@ -42,8 +42,8 @@ public static class ChoiceDialog
         dialog.Add(
             new Label { X = 0, Y = 0, Text = "Transformer" }, transformer,
             new Label { X = 0, Y = 1, Text = "Candidates" }, candidates,
-            new Label { X = 0, Y = 2, Text = "Loss-load" }, factor,
-            new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "factor 0..1, or a profile below (one of the two)" },
+            new Label { X = 0, Y = 2, Text = "Loss-load factor" }, factor,
+            new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "0..1, or a profile CSV below (one of the two)" },
             new Label { X = 0, Y = 3, Text = "Profile CSV" }, profile,
             new Label { X = 0, Y = 4, Text = "No-load A" }, noLoad,
             new Label { X = at + 11, Y = 4, Text = "Load B" }, load,

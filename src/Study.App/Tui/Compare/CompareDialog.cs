@@ -27,7 +27,7 @@ public static class CompareDialog
             Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.BeforeScenario)),
         };
         var fileLabel = new Label { X = 0, Y = 5, Text = "file" };
-        var file = new TextField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
+        var file = new EntryField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
         var afterLabel = new Label { X = 0, Y = 7, Text = "After" };
         var afterWhat = new Label { X = 12, Y = 7, Text = "this network as edited, in scenario" };
         var after = new OptionSelector
@@ -35,7 +35,7 @@ public static class CompareDialog
             X = 12, Y = 8, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
             Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.AfterScenario)),
         };
-        var hint = new Label { X = 0, Y = 10, Width = Dim.Fill(), Text = "A before file is solved in the after scenario; both cases are solved alike and matched by id." };
+        var hint = new Label { X = 0, Y = 10, Width = Dim.Fill(), Height = 2, Text = "A before file is solved in the after scenario;\nboth cases are solved alike and matched by id." };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels" };
         dialog.Add(modeLabel, mode, beforeLabel, before, fileLabel, file, afterLabel, afterWhat, after, hint, status);
         void Read()

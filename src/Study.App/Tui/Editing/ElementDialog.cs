@@ -18,9 +18,12 @@ namespace Study.App.Tui.Editing;
 /// </summary>
 public sealed class ElementDialog : Dialog
 {
-    private const int LabelWidth = 20;
+    // Labels up to 18 characters, and the "! " mark before one in error, stand whole beside their fields.
+    private const int LabelWidth = 21;
     private const int TextWidth = 13;
     private const int HintWidth = 14;
+    /// <summary>No hotkeys in labels and hints: underscores belong to names (t_min, I_rM).</summary>
+    private static readonly System.Text.Rune Plain = new(0xffff);
     private readonly IApplication app;
     private readonly ElementForm form;
     private readonly View fields;
@@ -35,11 +38,12 @@ public sealed class ElementDialog : Dialog
         this.app = app;
         this.form = form;
         Title = form.Title;
-        Width = Dim.Percent(96);
+        Width = Dim.Percent(98);
         Height = Dim.Percent(94);
         fields = new View { X = 0, Y = 0, Width = LabelWidth + TextWidth + HintWidth + 1, Height = Dim.Fill(2), CanFocus = true };
         fields.SetContentSize(new System.Drawing.Size(LabelWidth + TextWidth + HintWidth + 1, form.Fields.Count));
-        findings = new TextPane { X = Pos.Right(fields) + 1, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(2), CanFocus = false };
+        // The working of a motor runs past 24 rows: Tab reaches it, and arrows or PgDn scroll it.
+        findings = new TextPane { X = Pos.Right(fields) + 1, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(2) };
         status = new Label { X = 0, Y = Pos.AnchorEnd(2), Width = Dim.Fill(), Text = "" };
         state = form.Evaluate();
         for (int i = 0; i < form.Fields.Count; i++) AddField(i);
@@ -77,8 +81,8 @@ public sealed class ElementDialog : Dialog
     private void AddField(int row)
     {
         ElementField field = form.Fields[row];
-        var label = new Label { X = 0, Y = row, Width = LabelWidth, Text = Fit(field.Header, LabelWidth - 1) };
-        var text = new TextField { X = LabelWidth, Y = row, Width = TextWidth, Text = form.Texts[row] };
+        var label = new Label { X = 0, Y = row, Width = LabelWidth, Text = Fit(field.Header, LabelWidth - 3), HotKeySpecifier = Plain };
+        var text = new EntryField { X = LabelWidth, Y = row, Width = TextWidth, Text = form.Texts[row] };
         text.TextChanged += (_, _) =>
         {
             form.Texts[row] = text.Text;
@@ -104,7 +108,7 @@ public sealed class ElementDialog : Dialog
         texts.Add(text);
         fields.Add(label, text);
         string hint = Hint(field);
-        if (hint.Length > 0) fields.Add(new Label { X = LabelWidth + TextWidth + 1, Y = row, Width = HintWidth, Text = Fit(hint, HintWidth) });
+        if (hint.Length > 0) fields.Add(new Label { X = LabelWidth + TextWidth + 1, Y = row, Width = HintWidth, Text = Fit(hint, HintWidth), HotKeySpecifier = Plain });
     }
 
     private void Refresh()

@@ -29,6 +29,9 @@ public sealed record ElementField(
 
     /// <summary>True when blank is not allowed: the hint says "required" rather than a default.</summary>
     public bool Required { get; init; }
+
+    /// <summary>True for a number: its key may stand in a per-unit formula, where the form names it by its label.</summary>
+    public bool Numeric { get; init; }
 }
 
 /// <summary>One value a field may take, with words that help choose it ("CQ11", "11 kV · Cold Quay 11 kV board").</summary>
@@ -70,7 +73,7 @@ public static class Field
         {
             if (text.Trim().Length == 0) throw new FormatException($"{header} is required");
             return set((T)e, Parse(header, text))!;
-        }) { Required = true };
+        }) { Required = true, Numeric = true };
     }
 
     public static ElementField Text<T>(string name, Func<T, string?> get, Func<T, string?, T> set) =>
@@ -78,11 +81,11 @@ public static class Field
 
     public static ElementField Number<T>(string name, string unit, double defaultValue, Func<T, double> get, Func<T, double, T> set) =>
         new(name, unit, Format(defaultValue), e => Format(get((T)e)), (e, text) =>
-            set((T)e, text.Trim().Length == 0 ? defaultValue : Parse(HeaderOf(name, unit), text))!);
+            set((T)e, text.Trim().Length == 0 ? defaultValue : Parse(HeaderOf(name, unit), text))!) { Numeric = true };
 
     public static ElementField Optional<T>(string name, string unit, string defaultText, Func<T, double?> get, Func<T, double?, T> set) =>
         new(name, unit, defaultText, e => get((T)e) is double v ? Format(v) : "", (e, text) =>
-            set((T)e, text.Trim().Length == 0 ? null : Parse(HeaderOf(name, unit), text))!);
+            set((T)e, text.Trim().Length == 0 ? null : Parse(HeaderOf(name, unit), text))!) { Numeric = true };
 
     public static ElementField Integer<T>(string name, string unit, int defaultValue, Func<T, int> get, Func<T, int, T> set) =>
         new(name, unit, defaultValue.ToString(Inv), e => get((T)e).ToString(Inv), (e, text) =>
@@ -91,7 +94,7 @@ public static class Field
             if (!int.TryParse(text.Trim(), NumberStyles.Integer, Inv, out int v))
                 throw new FormatException($"{HeaderOf(name, unit)}: '{text.Trim()}' is not a whole number");
             return set((T)e, v)!;
-        });
+        }) { Numeric = true };
 
     public static IReadOnlyList<FieldOption> YesNo { get; } = [new("yes"), new("no")];
 
@@ -110,10 +113,13 @@ public static class Field
 
     private static string HeaderOf(string name, string unit) => unit.Length > 0 ? $"{name} {unit}" : name;
 
-    /// <summary>A choice among enum values, written in the file's lower-case spelling.</summary>
+    /// <summary>
+    /// A choice among enum values, written in the file's lower-case spelling. The label is the name alone:
+    /// F4 lists the spellings and a wrong one is answered with them, so they need not fill the label.
+    /// </summary>
     public static ElementField Choice<T, TEnum>(string name, TEnum defaultValue, Func<T, TEnum> get, Func<T, TEnum, T> set)
         where TEnum : struct, Enum =>
-        new ElementField(name, string.Join("/", Enum.GetNames<TEnum>().Select(s => s.ToLowerInvariant())), defaultValue.ToString().ToLowerInvariant(),
+        new ElementField(name, "", defaultValue.ToString().ToLowerInvariant(),
             e => get((T)e).ToString().ToLowerInvariant(), (e, text) =>
             {
                 if (text.Trim().Length == 0) return set((T)e, defaultValue)!;
@@ -123,13 +129,13 @@ public static class Field
             })
         { Options = _ => Enum.GetNames<TEnum>().Select(s => new FieldOption(s.ToLowerInvariant())).ToList() };
 
-    /// <summary>A choice among enum values with the spellings given (the file's own), e.g. km / line / pu.</summary>
+    /// <summary>A choice among enum values with the spellings given (the file's own), e.g. km / line / pu; labelled like <see cref="Choice"/>.</summary>
     public static ElementField Named<T, TEnum>(string name, IReadOnlyList<(TEnum Value, string Text)> spellings, TEnum defaultValue,
         Func<T, TEnum> get, Func<T, TEnum, T> set)
         where TEnum : struct, Enum
     {
         string Spell(TEnum v) => spellings.First(s => EqualityComparer<TEnum>.Default.Equals(s.Value, v)).Text;
-        return new ElementField(name, string.Join("/", spellings.Select(s => s.Text)), Spell(defaultValue), e => Spell(get((T)e)), (e, text) =>
+        return new ElementField(name, "", Spell(defaultValue), e => Spell(get((T)e)), (e, text) =>
         {
             string t = text.Trim().ToLowerInvariant();
             if (t.Length == 0) return set((T)e, defaultValue)!;

@@ -24,6 +24,7 @@ public sealed class ElementForm
 {
     private readonly Network network;
     private readonly object start;
+    private FieldWords? words;
 
     /// <summary>Edits <paramref name="originalId"/>, or adds a new element when it is null.</summary>
     public ElementForm(Network network, ElementKind kind, string? originalId)
@@ -100,7 +101,7 @@ public sealed class ElementForm
     }
 
     /// <summary>The form's label, with its unit, for a file key ("Impedance %" for zPercent); the key itself when no field edits it.</summary>
-    public string LabelOf(string key) => Labels().GetValueOrDefault(key) ?? key;
+    public string LabelOf(string key) => Words.LabelOf(key) ?? key;
 
     /// <summary>The first field editing <paramref name="key"/> or something inside it ("z0" finds "z0.r"); null when none does.</summary>
     public int? FieldOf(string key)
@@ -115,17 +116,9 @@ public sealed class ElementForm
 
     /// <summary>
     /// A validator message in the form's words: every file key a field edits is replaced by that field's
-    /// label, longest keys first, so "tap.position 9 is outside the range" reads "Present position 9 …".
+    /// label, so "tap.position 9 is outside the range" reads "Present position 9 …".
     /// </summary>
-    public string InLabels(string message)
-    {
-        foreach (var (key, label) in Labels().OrderByDescending(k => k.Key.Length))
-            message = System.Text.RegularExpressions.Regex.Replace(message,
-                $@"(?<![\w.]){System.Text.RegularExpressions.Regex.Escape(key)}(?![\w])", label);
-        return message;
-    }
+    public string InLabels(string message) => Words.Replace(message);
 
-    /// <summary>Each file key with the label and unit of the field (or fields, joined: "Lowest position / Highest position") that edit it.</summary>
-    private Dictionary<string, string> Labels() => Fields.Where(f => f.Key is not null).GroupBy(f => f.Key!)
-        .ToDictionary(g => g.Key, g => string.Join(" / ", g.Select(f => f.Header)));
+    private FieldWords Words => words ??= FieldWords.ForMessages(Fields);
 }

@@ -20,10 +20,11 @@ public static class FaultDialog
             X = 10, Y = i, Text = FaultForm.KindLabel(k),
             Value = form.Kinds.Contains(k) ? CheckState.Checked : CheckState.UnChecked,
         }).ToList();
-        var methodLabel = new Label { X = 0, Y = 5, Text = "Method" };
+        // The choices stand one under another: side by side, the longer ones ran past the frame at 80 columns.
+        var methodLabel = new Label { X = 0, Y = 4, Text = "Method" };
         var method = new OptionSelector
         {
-            X = 10, Y = 5, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            X = 10, Y = 4, Width = Dim.Fill(),
             Labels = ["iec60909 (equivalent source)", "loadflow (pre-fault voltages)"],
             Value = form.Method == FaultMethod.Iec60909 ? 0 : 1,
         };
@@ -37,18 +38,18 @@ public static class FaultDialog
         var whereLabel = new Label { X = 0, Y = 7, Text = "Where" };
         var where = new OptionSelector
         {
-            X = 10, Y = 7, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
+            X = 10, Y = 7, Width = Dim.Fill(),
             Labels = ["all buses", form.SelectedBus is { } bus ? $"only bus {bus} (selected in the Buses table)" : "only the selected bus (none selected)"],
             Value = form.AllBuses ? 0 : 1,
         };
         // Underscores are part of the names (t_min, I_b), not hotkey marks.
         var plain = new System.Text.Rune(0xffff);
-        var timesLabel = new Label { X = 0, Y = 8, Text = "t_min s", HotKeySpecifier = plain };
-        var tMin = new TextField { X = 10, Y = 8, Width = 7, Text = form.TMinText };
-        var tkLabel = new Label { X = 18, Y = 8, Text = "T_k s", HotKeySpecifier = plain };
-        var tk = new TextField { X = 24, Y = 8, Width = 7, Text = form.DurationText };
-        var timesHint = new Label { X = 32, Y = 8, Width = Dim.Fill(), Text = "blank: 0.1 and 1 (I_b, i_DC; I_th)", HotKeySpecifier = plain };
-        var caution = new TextPane { X = 0, Y = 9, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
+        var timesLabel = new Label { X = 0, Y = 9, Text = "t_min s", HotKeySpecifier = plain };
+        var tMin = new EntryField { X = 10, Y = 9, Width = 7, Text = form.TMinText };
+        var tkLabel = new Label { X = 18, Y = 9, Text = "T_k s", HotKeySpecifier = plain };
+        var tk = new EntryField { X = 24, Y = 9, Width = 7, Text = form.DurationText };
+        var timesHint = new Label { X = 32, Y = 9, Width = Dim.Fill(), Text = "blank: 0.1 and 1 (I_b, i_DC; I_th)", HotKeySpecifier = plain };
+        var caution = new TextPane { X = 0, Y = 10, Height = Dim.Fill(1), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
         dialog.Add(kindsLabel);
         foreach (CheckBox box in boxes) dialog.Add(box);
