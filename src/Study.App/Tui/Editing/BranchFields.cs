@@ -10,6 +10,10 @@ public static class BranchFields
     private static readonly (ImpedanceBasis Value, string Text)[] Bases =
         [(ImpedanceBasis.PerKm, "km"), (ImpedanceBasis.WholeLine, "line"), (ImpedanceBasis.PerUnit, "pu")];
 
+    /// <summary>The conductor materials as the file spells them.</summary>
+    private static readonly (ConductorMaterial Value, string Text)[] Conductors =
+        [(ConductorMaterial.Copper, "copper"), (ConductorMaterial.Aluminium, "aluminium")];
+
     public static IReadOnlyList<ElementField> Line { get; } =
     [
         Field.Id<Line>("Id", e => e.Id, (e, v) => e with { Id = v }).Keyed("id"),
@@ -18,6 +22,8 @@ public static class BranchFields
         Field.Optional<Line>("Length", "km", "", e => e.Km, (e, v) => e with { Km = v }).Keyed("km"),
         .. SequenceFields("1", "Z1 basis", e => e.Z1, (e, z) => e with { Z1 = z }),
         Field.Optional<Line>("Rating", "MVA", "none", e => e.RatingMva, (e, v) => e with { RatingMva = v }).Keyed("ratingMva"),
+        // The material sets how much r rises at the end-of-fault temperature of a minimum-level fault.
+        Field.NamedOptional<Line, ConductorMaterial>("Conductor", Conductors, "not given", e => e.Conductor, (e, v) => e with { Conductor = v }).Keyed("conductor"),
         .. SequenceFields("0", "Z0 basis", e => e.Z0, (e, z) => e with { Z0 = z }),
         Field.Flag<Line>("In service", true, e => e.InService, (e, v) => e with { InService = v }).Keyed("inService"),
     ];

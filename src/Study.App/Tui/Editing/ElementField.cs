@@ -146,6 +146,23 @@ public static class Field
         { Options = _ => spellings.Select(s => new FieldOption(s.Text)).ToList() };
     }
 
+    /// <summary>A choice with the file's spellings that may be left blank: blank is "not given" (null), as the file leaves the key out.</summary>
+    public static ElementField NamedOptional<T, TEnum>(string name, IReadOnlyList<(TEnum Value, string Text)> spellings, string blankText,
+        Func<T, TEnum?> get, Func<T, TEnum?, T> set)
+        where TEnum : struct, Enum
+    {
+        string Spell(TEnum? v) => v is TEnum known ? spellings.First(s => EqualityComparer<TEnum>.Default.Equals(s.Value, known)).Text : "";
+        return new ElementField(name, "", blankText, e => Spell(get((T)e)), (e, text) =>
+        {
+            string t = text.Trim().ToLowerInvariant();
+            if (t.Length == 0) return set((T)e, null)!;
+            foreach (var (value, spelled) in spellings)
+                if (spelled.ToLowerInvariant() == t) return set((T)e, value)!;
+            throw new FormatException($"{name}: one of {string.Join(", ", spellings.Select(s => s.Text))}, or blank for not given");
+        })
+        { Options = _ => spellings.Select(s => new FieldOption(s.Text)).ToList() };
+    }
+
     private static double Parse(string name, string text)
     {
         if (!double.TryParse(text.Trim(), NumberStyles.Float, Inv, out double v) || !double.IsFinite(v))
