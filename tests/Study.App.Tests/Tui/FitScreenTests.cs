@@ -1,5 +1,6 @@
 // At 80×24 nothing a user must read is cut at an edge: menus with their descriptions and keys, the
-// study dialogs with every label and option, the edit forms with every label, hint and per-unit step.
+// study dialogs with every label and option, the edit forms with every label, hint and per-unit step,
+// and a long value in a field not being edited from its start.
 using System.Text.RegularExpressions;
 using Study.App.Tui.Editing;
 using Study.App.Tui.Shell;
@@ -218,5 +219,34 @@ public sealed class FitScreenTests : IDisposable
         // The steps name the same numbers the form holds: 10 % on the bank's own base, 0.1 pu.
         FormState state = new ElementForm(n, ElementKind.Transformer, "CQ-T1").Evaluate();
         Assert.Contains("z (own base) = Impedance % / 100 = 10 / 100 = 0.1 pu", state.Preview);
+    }
+
+    [Fact]
+    public void A_long_name_shows_its_start_when_its_field_is_not_being_edited()
+    {
+        Network n = DemoNetwork.Read();
+        const string name = "Cold Quay 33 kV substation board";
+        n = n with { Buses = n.Buses.Select(b => b.Id == "CQ33" ? b with { Name = name } : b).ToList() };
+        var form = new ElementForm(n, ElementKind.Bus, "CQ33");
+        int field = form.FieldOf("name")!.Value;
+        using var h = new Headless();
+        var dialog = new ElementDialog(h.App, form);
+        string opened = "", left = "", typed = "";
+        h.Run(dialog, new Step("the form", () => true, () =>
+        {
+            opened = h.Draw();
+            // Typed afresh (a field selects its text when it takes the keyboard, so typing replaces it), then left.
+            dialog.Texts[field].SetFocus();
+            h.Type(name.ToUpperInvariant());
+            typed = dialog.Texts[field].Text;
+            dialog.Texts[0].SetFocus();
+            left = h.Draw();
+            dialog.Texts[field].Text = name; // unchanged again, so the form closes without asking
+        }));
+
+        string Row(string screen) => screen.Split('\n').Single(r => r.Contains("Name ", StringComparison.Ordinal));
+        Assert.Contains("Name                 Cold Quay 33", Row(opened));
+        Assert.Equal(name.ToUpperInvariant(), typed);
+        Assert.Contains("Name                 COLD QUAY 33", Row(left));
     }
 }

@@ -25,13 +25,13 @@ public static class ChoiceDialog
             Labels = form.Transformers.Count == 0 ? ["(none)"] : form.Transformers.ToList(),
             Value = Math.Max(0, form.Transformers.ToList().IndexOf(form.TransformerId)),
         };
-        var candidates = new TextField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
-        var factor = new TextField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
-        var profile = new TextField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
-        var noLoad = new TextField { X = at, Y = 4, Width = 10, Text = form.NoLoadRateText };
-        var load = new TextField { X = at + 20, Y = 4, Width = 10, Text = form.LoadRateText };
-        var low = new TextField { X = at, Y = 5, Width = 8, Text = form.BandLowText };
-        var high = new TextField { X = at + 14, Y = 5, Width = 8, Text = form.BandHighText };
+        var candidates = new EntryField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
+        var factor = new EntryField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
+        var profile = new EntryField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
+        var noLoad = new EntryField { X = at, Y = 4, Width = 10, Text = form.NoLoadRateText };
+        var load = new EntryField { X = at + 20, Y = 4, Width = 10, Text = form.LoadRateText };
+        var low = new EntryField { X = at, Y = 5, Width = 8, Text = form.BandLowText };
+        var high = new EntryField { X = at + 14, Y = 5, Width = 8, Text = form.BandHighText };
         var scenarios = new OptionSelector
         {
             X = at, Y = 6, Width = Dim.Fill(), Orientation = Orientation.Horizontal,

@@ -27,7 +27,7 @@ public static class CompareDialog
             Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.BeforeScenario)),
         };
         var fileLabel = new Label { X = 0, Y = 5, Text = "file" };
-        var file = new TextField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
+        var file = new EntryField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
         var afterLabel = new Label { X = 0, Y = 7, Text = "After" };
         var afterWhat = new Label { X = 12, Y = 7, Text = "this network as edited, in scenario" };
         var after = new OptionSelector

@@ -82,7 +82,7 @@ public sealed class ElementDialog : Dialog
     {
         ElementField field = form.Fields[row];
         var label = new Label { X = 0, Y = row, Width = LabelWidth, Text = Fit(field.Header, LabelWidth - 3), HotKeySpecifier = Plain };
-        var text = new TextField { X = LabelWidth, Y = row, Width = TextWidth, Text = form.Texts[row] };
+        var text = new EntryField { X = LabelWidth, Y = row, Width = TextWidth, Text = form.Texts[row] };
         text.TextChanged += (_, _) =>
         {
             form.Texts[row] = text.Text;

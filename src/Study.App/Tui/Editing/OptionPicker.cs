@@ -1,5 +1,6 @@
 // A list to pick a field's value from (a bus, a choice), narrowed as the user types.
 using System.Collections.ObjectModel;
+using Study.App.Tui.Shell;
 using Terminal.Gui.App;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -32,7 +33,7 @@ public static class OptionPicker
         int idWidth = options.Count == 0 ? 4 : Math.Min(16, options.Max(o => o.Value.Length));
         var dialog = new Dialog { Title = title, Width = Dim.Percent(70), Height = Dim.Percent(80) };
         var label = new Label { X = 0, Y = 0, Text = "Type to narrow:" };
-        var filter = new TextField { X = 16, Y = 0, Width = Dim.Fill() };
+        var filter = new EntryField { X = 16, Y = 0, Width = Dim.Fill() };
         var list = new ListView { X = 0, Y = 2, Width = Dim.Fill(), Height = Dim.Fill(1) };
         var hint = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "↑↓ choose · Enter picks · Esc leaves the field as it was" };
         IReadOnlyList<FieldOption> shown = options;

@@ -45,9 +45,9 @@ public static class FaultDialog
         // Underscores are part of the names (t_min, I_b), not hotkey marks.
         var plain = new System.Text.Rune(0xffff);
         var timesLabel = new Label { X = 0, Y = 9, Text = "t_min s", HotKeySpecifier = plain };
-        var tMin = new TextField { X = 10, Y = 9, Width = 7, Text = form.TMinText };
+        var tMin = new EntryField { X = 10, Y = 9, Width = 7, Text = form.TMinText };
         var tkLabel = new Label { X = 18, Y = 9, Text = "T_k s", HotKeySpecifier = plain };
-        var tk = new TextField { X = 24, Y = 9, Width = 7, Text = form.DurationText };
+        var tk = new EntryField { X = 24, Y = 9, Width = 7, Text = form.DurationText };
         var timesHint = new Label { X = 32, Y = 9, Width = Dim.Fill(), Text = "blank: 0.1 and 1 (I_b, i_DC; I_th)", HotKeySpecifier = plain };
         var caution = new TextPane { X = 0, Y = 10, Height = Dim.Fill(1), CanFocus = false, Content = "Caution: " + FaultStudy.Caution };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };

@@ -20,13 +20,13 @@ public static class ProfileDialog
     {
         var dialog = new Dialog { Title = "Load profile", Width = Dim.Percent(90), Height = 17 };
         var csvLabel = new Label { X = 0, Y = 0, Text = "Profile CSV" };
-        var csv = new TextField { X = 14, Y = 0, Width = Dim.Fill(), Text = form.CsvText };
+        var csv = new EntryField { X = 14, Y = 0, Width = Dim.Fill(), Text = form.CsvText };
         var csvHint = new Label { X = 14, Y = 1, Width = Dim.Fill(), Text = "time (ISO 8601), then 'scale' or a column per load id" };
         var stepLabel = new Label { X = 0, Y = 3, Text = "Step minutes" };
-        var step = new TextField { X = 14, Y = 3, Width = 8, Text = form.StepMinutesText };
+        var step = new EntryField { X = 14, Y = 3, Width = 8, Text = form.StepMinutesText };
         var stepHint = new Label { X = 23, Y = 3, Width = Dim.Fill(), Text = "blank: the spacing of the time column" };
         var watchLabel = new Label { X = 0, Y = 5, Text = "Watch buses" };
-        var watch = new TextField { X = 14, Y = 5, Width = Dim.Fill(), Text = form.WatchText };
+        var watch = new EntryField { X = 14, Y = 5, Width = Dim.Fill(), Text = form.WatchText };
         var watchHint = new Label { X = 14, Y = 6, Width = Dim.Fill(), Text = "ids by comma; blank: those on-load taps regulate" };
         var scenLabel = new Label { X = 0, Y = 8, Text = "Scenario" };
         var scenario = new OptionSelector

@@ -47,7 +47,7 @@ public static class Prompts
     {
         var dialog = new Dialog { Title = title, Width = Dim.Percent(90), Height = 7 };
         var label = new Label { X = 0, Y = 0, Text = "File:" };
-        var path = new TextField { X = 6, Y = 0, Width = Dim.Fill(), Text = initial };
+        var path = new EntryField { X = 6, Y = 0, Width = Dim.Fill(), Text = initial };
         dialog.Add(label, path);
         dialog.AddButton(new Button { Text = "Cancel" });
         dialog.AddButton(new Button { Text = "OK" });

@@ -27,10 +27,10 @@ public static class StartDialog
             if (form.Chosen.Contains(form.Motors[i].Id)) motors.Source?.SetMark(i, true);
         if (form.Motors.Count > 0) motors.SelectedItem = 0;
         var minLabel = new Label { X = 0, Y = Pos.AnchorEnd(9), Text = "Min terminal pu" };
-        var min = new TextField { X = 17, Y = Pos.AnchorEnd(9), Width = 8, Text = form.MinTerminalText };
+        var min = new EntryField { X = 17, Y = Pos.AnchorEnd(9), Width = 8, Text = form.MinTerminalText };
         var minHint = new Label { X = 26, Y = Pos.AnchorEnd(9), Width = Dim.Fill(), Text = "blank: 0.80" };
         var watchLabel = new Label { X = 0, Y = Pos.AnchorEnd(8), Text = "Watch buses" };
-        var watch = new TextField { X = 17, Y = Pos.AnchorEnd(8), Width = Dim.Fill(), Text = form.WatchText };
+        var watch = new EntryField { X = 17, Y = Pos.AnchorEnd(8), Width = Dim.Fill(), Text = form.WatchText };
         var scenLabel = new Label { X = 0, Y = Pos.AnchorEnd(7), Text = "Scenario" };
         var scenario = new OptionSelector
         {

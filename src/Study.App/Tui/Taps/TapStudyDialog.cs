@@ -14,12 +14,12 @@ public static class TapStudyDialog
     {
         var dialog = new Dialog { Title = $"Tap study: {form.TransformerId}", Width = Dim.Percent(90), Height = 16 };
         var bandLabel = new Label { X = 0, Y = 0, Text = "Band pu  low" };
-        var low = new TextField { X = 14, Y = 0, Width = 8, Text = form.BandLowText };
+        var low = new EntryField { X = 14, Y = 0, Width = 8, Text = form.BandLowText };
         var highLabel = new Label { X = 23, Y = 0, Text = "high" };
-        var high = new TextField { X = 28, Y = 0, Width = 8, Text = form.BandHighText };
+        var high = new EntryField { X = 28, Y = 0, Width = 8, Text = form.BandHighText };
         var bandHint = new Label { X = 37, Y = 0, Width = Dim.Fill(), Text = "blank: each bus's own band" };
         var watchLabel = new Label { X = 0, Y = 2, Text = "Watch buses" };
-        var watch = new TextField { X = 14, Y = 2, Width = Dim.Fill(), Text = form.WatchText };
+        var watch = new EntryField { X = 14, Y = 2, Width = Dim.Fill(), Text = form.WatchText };
         var watchHint = new Label { X = 14, Y = 3, Width = Dim.Fill(), Text = "ids by comma; blank: the lv bus and the buses it feeds" };
         var scenLabel = new Label { X = 0, Y = 5, Text = "Scenarios" };
         var scenarios = new OptionSelector
