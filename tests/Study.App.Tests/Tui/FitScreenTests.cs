@@ -249,4 +249,24 @@ public sealed class FitScreenTests : IDisposable
         Assert.Equal(name.ToUpperInvariant(), typed);
         Assert.Contains("Name                 COLD QUAY 33", Row(left));
     }
+
+    [Fact]
+    public void The_motor_forms_per_unit_working_longer_than_the_screen_is_reached_by_Tab_and_scrolled_to_its_last_step()
+    {
+        var form = new ElementForm(DemoNetwork.Read(), ElementKind.Motor, "M-CS-COMP");
+        using var h = new Headless();
+        var dialog = new ElementDialog(h.App, form);
+        string first = "", last = "";
+        h.Run(dialog, new Step("the form", () => true, () =>
+        {
+            dialog.Texts[^1].SetFocus();
+            first = h.Draw();
+            h.Keys(Key.Tab, Key.End);
+            last = h.Draw();
+        }));
+
+        // The last step (the starter taken as direct on line) lies below the 80×24 screen until scrolled to.
+        Assert.DoesNotContain("direct on line", first);
+        Assert.Contains("direct on line", last);
+    }
 }

@@ -43,7 +43,8 @@ public sealed class ElementDialog : Dialog
         Height = Dim.Percent(94);
         fields = new View { X = 0, Y = 0, Width = LabelWidth + TextWidth + HintWidth + 1, Height = Dim.Fill(2), CanFocus = true };
         fields.SetContentSize(new System.Drawing.Size(LabelWidth + TextWidth + HintWidth + 1, form.Fields.Count));
-        findings = new TextPane { X = Pos.Right(fields) + 1, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(2), CanFocus = false };
+        // The working of a motor runs past 24 rows: Tab reaches it, and arrows or PgDn scroll it.
+        findings = new TextPane { X = Pos.Right(fields) + 1, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(2) };
         status = new Label { X = 0, Y = Pos.AnchorEnd(2), Width = Dim.Fill(), Text = "" };
         state = form.Evaluate();
         for (int i = 0; i < form.Fields.Count; i++) AddField(i);
