@@ -6,19 +6,12 @@ namespace Study.App.Tui.Shell;
 
 /// <summary>
 /// A <see cref="TextField"/> that, without the keyboard, shows the beginning of its text ("Cold Quay 33"
-/// of a long bus name), where a plain one stays scrolled to its cursor, which setting the text leaves
-/// at the end ("tation board"). With the keyboard the cursor goes to the end, as typing into a field expects.
+/// of a long bus name), where a plain one stays scrolled to its cursor, which setting or typing the
+/// text leaves at the end ("tation board"). With the keyboard it is a plain text field: it selects its
+/// text when it takes the keyboard, so typing replaces the value.
 /// </summary>
 public class EntryField : TextField
 {
-    public EntryField()
-    {
-        HasFocusChanged += (_, e) =>
-        {
-            if (e.NewValue) MoveEnd();
-        };
-    }
-
     /// <summary>Checked as it draws, so text set at any time (built, picked from a list, typed then left) starts at its start.</summary>
     protected override bool OnDrawingContent(DrawContext? context)
     {
