@@ -265,8 +265,9 @@ public sealed class FitScreenTests : IDisposable
             last = h.Draw();
         }));
 
-        // The last step (the starter taken as direct on line) lies below the 80×24 screen until scrolled to.
-        Assert.DoesNotContain("direct on line", first);
-        Assert.Contains("direct on line", last);
+        // The last step (the locked-rotor reactance) lies below the 80×24 screen until scrolled to.
+        Assert.DoesNotContain("x_LR", first);
+        Assert.Contains("x_LR = |z_M| · sin φ_LR", last);
+        Assert.Contains("4.26211 pu", last);
     }
 }

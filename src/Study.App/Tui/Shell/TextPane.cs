@@ -98,6 +98,8 @@ public sealed class TextPane : View
     protected override bool OnKeyDown(Key key)
     {
         int lines = Wrap(content, Viewport.Width).Count;
+        // The scroll limit follows the text as it is now: the size set at the last draw may be of older text.
+        SetContentSize(new System.Drawing.Size(Viewport.Width, Math.Max(lines, 1)));
         int y = Viewport.Y;
         if (key == Key.CursorDown) y++;
         else if (key == Key.CursorUp) y--;
