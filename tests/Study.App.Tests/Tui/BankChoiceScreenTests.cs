@@ -8,6 +8,8 @@ using Study.Core.Cases;
 using Study.Core.Io;
 using Study.Core.Model;
 using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
 
 namespace Study.App.Tests.Tui;
 
@@ -49,6 +51,40 @@ public sealed class BankChoiceScreenTests : IDisposable
         form.ProfileText = temp.File("none.csv");
         form.LossLoadFactorText = "";
         Assert.Contains("no such file", form.Build().Error);
+    }
+
+    [Fact]
+    public void With_more_banks_than_fit_side_by_side_the_transformer_is_typed_or_picked_with_F4()
+    {
+        Network n = DemoNetwork.Read();
+        Transformer model = n.Transformers.Single(t => t.Id == "CQ-T1");
+        n = n with { Transformers = [.. n.Transformers, .. Enumerable.Range(1, 12).Select(i => model with { Id = $"SPARE-BANK-{i}", InService = false })] };
+        var form = new ChoiceForm(n, null, null);
+        using var h = new Headless();
+        Dialog dialog = ChoiceDialog.Build(form, out _, out Action read, out View first, h.App);
+        string shown = "", picker = "";
+        h.Run(dialog,
+            new Step("the dialog", () => true, () =>
+            {
+                shown = h.Draw();
+                first.SetFocus();
+                h.Keys(Key.F4);
+            }),
+            new Step("the list of transformers", () => h.App.TopRunnableView is Dialog d && d.Title.Contains("transformer", StringComparison.Ordinal), () =>
+            {
+                picker = h.Draw();
+                h.Type("SPARE-BANK-7");
+                h.Keys(Key.Enter);
+            }),
+            new Step("the dialog again", () => h.App.TopRunnableView == dialog, () => read()));
+
+        Assert.Contains($"F4 lists the {n.Transformers.Count} transformers", shown);
+        Assert.DoesNotContain("SPARE-BANK-3", shown); // not laid side by side past the frame
+        Assert.Contains("SPARE-BANK-1", picker);
+        Assert.Contains("CQ-T1", picker);
+        Assert.Equal("SPARE-BANK-7", form.TransformerId);
+        form.TransformerId = "NOPE";
+        Assert.Contains("'NOPE' is not a two-winding transformer", form.Build().Error);
     }
 
     [Fact]

@@ -33,7 +33,10 @@ public sealed class ChoiceForm(Network network, string? activeScenario, string? 
 
     public (ChoiceQuestion? Question, string? Error) Build()
     {
-        if (!Transformers.Contains(TransformerId)) return (null, Transformers.Count == 0 ? "the network has no two-winding transformer to replace" : "choose the transformer the candidates replace");
+        if (!Transformers.Contains(TransformerId))
+            return (null, Transformers.Count == 0 ? "the network has no two-winding transformer to replace"
+                : TransformerId.Trim().Length > 0 ? $"'{TransformerId.Trim()}' is not a two-winding transformer of this network (F4 lists them)"
+                : "choose the transformer the candidates replace");
         string candidates = CandidatesText.Trim();
         if (candidates.Length == 0 || !File.Exists(candidates)) return (null, candidates.Length == 0 ? "give the candidates file" : $"{candidates}: no such file");
         string? profile = ProfileText.Trim().Length > 0 ? ProfileText.Trim() : null;
