@@ -116,6 +116,21 @@ public sealed class FormAndResultTests
     }
 
     [Fact]
+    public void Wrapped_text_hangs_under_the_last_column_of_an_aligned_row_and_under_the_indent_otherwise()
+    {
+        string row = "  F2                 Save                  Save to the network file (or ask for a name)";
+        IReadOnlyList<string> keys = TextPane.Wrap(row, 73);
+        Assert.Equal(2, keys.Count);
+        int column = row.IndexOf("Save to", StringComparison.Ordinal);
+        Assert.Equal(column, keys[1].Length - keys[1].TrimStart().Length);
+        Assert.True(keys.All(l => l.Length <= 73));
+        // A sentence wraps under its own indent, two further in.
+        IReadOnlyList<string> note = TextPane.Wrap("Note: steady-state I_k: I''k with the motors left out (far from generators)", 40);
+        Assert.StartsWith("  ", note[1]);
+        Assert.False(note[1].StartsWith("   ", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Help_lists_every_command_key()
     {
         string help = HelpDialog.Text();

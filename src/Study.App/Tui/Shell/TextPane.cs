@@ -43,6 +43,10 @@ public sealed class TextPane : View
         {
             string rest = raw.TrimEnd('\r');
             string indent = new(' ', Math.Min(rest.Length - rest.TrimStart().Length, width / 2));
+            // A row of aligned columns (keys, then what they do) hangs its wrapped words under its last
+            // column, when that column starts within the first two thirds of the width.
+            int column = LastColumn(rest);
+            if (column > indent.Length + 2 && column <= width * 2 / 3) indent = new string(' ', column - 2);
             bool first = true;
             do
             {
@@ -61,6 +65,16 @@ public sealed class TextPane : View
             while (rest.Length > 0);
         }
         return lines;
+    }
+
+    /// <summary>Where the last column of an aligned row starts (after a gap of three or more spaces); 0 when none.</summary>
+    private static int LastColumn(string line)
+    {
+        int gap = line.TrimStart().Length == 0 ? -1 : line.LastIndexOf("   ", StringComparison.Ordinal);
+        if (gap <= 0 || line.Length - line.TrimStart().Length >= gap) return 0;
+        int start = gap;
+        while (start < line.Length && line[start] == ' ') start++;
+        return start < line.Length ? start : 0;
     }
 
     protected override bool OnDrawingContent(DrawContext? context)
