@@ -88,6 +88,7 @@ public sealed class CompareTabTests : IDisposable
         MainWindow main = h.Main(session);
         main.Select(ElementKind.Transformer, "CQ-T1");
         string shown = "", suggested = "";
+        bool beforeScenarioEnabled = true;
         h.Run(main,
             new Step("the main window", () => true, () => h.Keys(Key.F4)),
             new Step("the Edit transformer form", () => h.App.TopRunnableView is ElementDialog, () =>
@@ -103,8 +104,12 @@ public sealed class CompareTabTests : IDisposable
             new Step("the edit made", () => !h.DialogUp, () => h.Keys(Key.C.WithAlt)),
             new Step("the compare dialog", () => h.DialogUp, () =>
             {
+                Assert.False(Descendants(h.App.TopRunnableView!).OfType<TextField>().Single().Enabled);
                 Pick(h, Selector.Mode, "another network file (the network before the change)");
                 suggested = Descendants(h.App.TopRunnableView!).OfType<TextField>().Single().Text;
+                // The before scenario is not used for a file: only the file row takes input now.
+                Assert.True(Descendants(h.App.TopRunnableView!).OfType<TextField>().Single().Enabled);
+                beforeScenarioEnabled = Descendants(h.App.TopRunnableView!).OfType<OptionSelector>().ElementAt((int)Selector.Before).Enabled;
                 Pick(h, Selector.After, "summer-night");
                 h.Keys(Key.Enter);
             }),
@@ -117,6 +122,7 @@ public sealed class CompareTabTests : IDisposable
 
         // The file before the change is the file as saved: the dialog offers it.
         Assert.Equal(file, suggested);
+        Assert.False(beforeScenarioEnabled);
         Assert.Equal(0, TapPosition(session));
 
         // The same comparison through the command line: the saved file against the edited network written out.
@@ -146,6 +152,7 @@ public sealed class CompareTabTests : IDisposable
         h.Keys(Key.Space);
         Assert.Equal(selector.SubViews.ToList().IndexOf(option), selector.Value);
     }
+
 
     private static IEnumerable<View> Descendants(View v) => v.SubViews.SelectMany(c => new[] { c }.Concat(Descendants(c)));
 

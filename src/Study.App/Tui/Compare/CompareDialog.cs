@@ -29,7 +29,7 @@ public static class CompareDialog
         var fileLabel = new Label { X = 0, Y = 5, Text = "file" };
         var file = new EntryField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
         var afterLabel = new Label { X = 0, Y = 7, Text = "After" };
-        var afterWhat = new Label { X = 12, Y = 7, Text = "this network as edited, in scenario" };
+        var afterWhat = new Label { X = 12, Y = 7, Text = "this network as it stands now, in scenario" };
         var after = new OptionSelector
         {
             X = 12, Y = 8, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
@@ -38,6 +38,15 @@ public static class CompareDialog
         var hint = new Label { X = 0, Y = 10, Width = Dim.Fill(), Height = 2, Text = "A before file is solved in the after scenario;\nboth cases are solved alike and matched by id." };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels" };
         dialog.Add(modeLabel, mode, beforeLabel, before, fileLabel, file, afterLabel, afterWhat, after, hint, status);
+        // Only the rows of the chosen kind of "before" take input: a before file is solved in the after scenario.
+        void ShowMode()
+        {
+            bool isFile = mode.Value == 1;
+            beforeLabel.Enabled = before.Enabled = !isFile;
+            fileLabel.Enabled = file.Enabled = isFile;
+        }
+        mode.ValueChanged += (_, _) => ShowMode();
+        ShowMode();
         void Read()
         {
             form.BeforeIsFile = mode.Value == 1;
