@@ -15,30 +15,12 @@ public static class ChoiceDialog
         return Prompts.RunStudyDialog(app, dialog, status, read, () => form.Build().Error, first);
     }
 
-    /// <summary>Transformer ids wider than this, side by side, would run past an 80-column dialog: they are typed or picked instead.</summary>
-    private const int SideBySide = 52;
-
     /// <param name="app">Runs the list of transformers on F4 when they are too many to stand side by side.</param>
     public static Dialog Build(ChoiceForm form, out Label status, out Action read, out View first, IApplication? app = null)
     {
         var dialog = new Dialog { Title = "Bank choice", Width = Dim.Percent(94), Height = Dim.Percent(94) };
         const int at = 18;
-        bool fits = form.Transformers.Sum(t => t.Length + 4) <= SideBySide;
-        var transformer = new OptionSelector
-        {
-            X = at, Y = 0, Width = Dim.Fill(), Orientation = Orientation.Horizontal,
-            Labels = form.Transformers.Count == 0 ? ["(none)"] : form.Transformers.ToList(),
-            Value = Math.Max(0, form.Transformers.ToList().IndexOf(form.TransformerId)),
-        };
-        // Many banks: the id is typed, or picked from the list (F4) with type-ahead, as in the edit forms.
-        var typed = new EntryField { X = at, Y = 0, Width = 16, Text = form.TransformerId };
-        typed.KeyDown += (_, key) =>
-        {
-            if (app is null || !(key == Terminal.Gui.Input.Key.F4 || key == Terminal.Gui.Input.Key.CursorDown.WithAlt)) return;
-            key.Handled = true;
-            var options = form.Transformers.Select(t => new Study.App.Tui.Editing.FieldOption(t)).ToList();
-            if (Study.App.Tui.Editing.OptionPicker.Run(app, "Bank choice: transformer", options, typed.Text) is { } picked) typed.Text = picked;
-        };
+        var transformer = new OneOfRow(app, "transformer", form.Transformers, form.Transformers.ToList().IndexOf(form.TransformerId), at, 0);
         var candidates = new EntryField { X = at, Y = 1, Width = Dim.Fill(), Text = form.CandidatesText };
         var factor = new EntryField { X = at, Y = 2, Width = 8, Text = form.LossLoadFactorText };
         var profile = new EntryField { X = at, Y = 3, Width = Dim.Fill(), Text = form.ProfileText };
@@ -53,11 +35,8 @@ public static class ChoiceDialog
             Value = form.AllScenarios ? 0 : 1,
         };
         status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels · Esc stops a running choice" };
-        dialog.Add(
-            new Label { X = 0, Y = 0, Text = "Transformer" },
-            // Only the way of choosing in use stands in the dialog, first in the Tab order.
-            fits ? transformer : typed,
-            new Label { X = at + 17, Y = 0, Width = Dim.Fill(), Text = fits ? "" : $"F4 lists the {form.Transformers.Count} transformers" },
+        dialog.Add([
+            new Label { X = 0, Y = 0, Text = "Transformer" }, .. transformer.Views,
             new Label { X = 0, Y = 1, Text = "Candidates" }, candidates,
             new Label { X = 0, Y = 2, Text = "Loss-load factor" }, factor,
             new Label { X = at + 9, Y = 2, Width = Dim.Fill(), Text = "0..1, or a profile CSV below (one of the two)" },
@@ -70,11 +49,10 @@ public static class ChoiceDialog
             new Label { X = at + 23, Y = 5, Width = Dim.Fill(), Text = "blank: each bus's own" },
             new Label { X = 0, Y = 6, Text = "Scenarios" }, scenarios,
             new TextPane { X = 0, Y = 8, Height = Dim.Fill(2), CanFocus = false, Content = "Caution: " + Study.Core.Faults.FaultStudy.Caution },
-            status);
+            status]);
         read = () =>
         {
-            form.TransformerId = !fits ? typed.Text.Trim()
-                : form.Transformers.Count == 0 ? "" : form.Transformers[Math.Clamp(transformer.Value ?? 0, 0, form.Transformers.Count - 1)];
+            form.TransformerId = transformer.Text;
             form.CandidatesText = candidates.Text;
             form.LossLoadFactorText = factor.Text;
             form.ProfileText = profile.Text;
@@ -84,8 +62,7 @@ public static class ChoiceDialog
             form.BandHighText = high.Text;
             form.AllScenarios = scenarios.Value != 1;
         };
-        (fits ? (View)typed : transformer).Dispose();
-        first = fits ? candidates : typed;
+        first = transformer.SideBySideShown ? candidates : transformer.Input;
         return dialog;
     }
 }

@@ -21,28 +21,21 @@ public static class CompareDialog
             Value = form.BeforeIsFile ? 1 : 0,
         };
         var beforeLabel = new Label { X = 0, Y = 3, Text = "scenario" };
-        var before = new OptionSelector
-        {
-            X = 12, Y = 3, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
-            Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.BeforeScenario)),
-        };
+        var before = new OneOfRow(app, "scenario", scenarioLabels, form.Scenarios.ToList().IndexOf(form.BeforeScenario), 12, 3);
         var fileLabel = new Label { X = 0, Y = 5, Text = "file" };
         var file = new EntryField { X = 12, Y = 5, Width = Dim.Fill(), Text = form.BeforePath };
         var afterLabel = new Label { X = 0, Y = 7, Text = "After" };
         var afterWhat = new Label { X = 12, Y = 7, Text = "this network as it stands now, in scenario" };
-        var after = new OptionSelector
-        {
-            X = 12, Y = 8, Width = Dim.Fill(), Orientation = Orientation.Horizontal, Labels = scenarioLabels,
-            Value = Math.Max(0, form.Scenarios.ToList().IndexOf(form.AfterScenario)),
-        };
+        var after = new OneOfRow(app, "scenario", scenarioLabels, form.Scenarios.ToList().IndexOf(form.AfterScenario), 12, 8);
         var hint = new Label { X = 0, Y = 10, Width = Dim.Fill(), Height = 2, Text = "A before file is solved in the after scenario;\nboth cases are solved alike and matched by id." };
         var status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Enter runs · Esc cancels" };
-        dialog.Add(modeLabel, mode, beforeLabel, before, fileLabel, file, afterLabel, afterWhat, after, hint, status);
+        dialog.Add([modeLabel, mode, beforeLabel, .. before.Views, fileLabel, file, afterLabel, afterWhat, .. after.Views, hint, status]);
         // Only the rows of the chosen kind of "before" take input: a before file is solved in the after scenario.
         void ShowMode()
         {
             bool isFile = mode.Value == 1;
-            beforeLabel.Enabled = before.Enabled = !isFile;
+            beforeLabel.Enabled = !isFile;
+            before.Enabled = !isFile;
             fileLabel.Enabled = file.Enabled = isFile;
         }
         mode.ValueChanged += (_, _) => ShowMode();
@@ -50,10 +43,11 @@ public static class CompareDialog
         void Read()
         {
             form.BeforeIsFile = mode.Value == 1;
-            form.BeforeScenario = form.Scenarios[Math.Clamp(before.Value ?? 0, 0, form.Scenarios.Count - 1)];
-            form.AfterScenario = form.Scenarios[Math.Clamp(after.Value ?? 0, 0, form.Scenarios.Count - 1)];
+            if (before.Index >= 0) form.BeforeScenario = form.Scenarios[before.Index];
+            if (after.Index >= 0) form.AfterScenario = form.Scenarios[after.Index];
             form.BeforePath = file.Text;
         }
-        return Prompts.RunStudyDialog(app, dialog, status, Read, () => form.Build().Error);
+        string? Rows() => (mode.Value == 1 ? null : before.Error) ?? after.Error;
+        return Prompts.RunStudyDialog(app, dialog, status, Read, () => Rows() ?? form.Build().Error);
     }
 }

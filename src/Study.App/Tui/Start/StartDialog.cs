@@ -12,12 +12,17 @@ public static class StartDialog
 {
     public static bool Run(IApplication app, StartForm form)
     {
-        Dialog dialog = Build(form, out Label status, out Action read, out View first);
-        return Prompts.RunStudyDialog(app, dialog, status, read, () => form.Build().Error, first);
+        Dialog dialog = Build(form, out Label status, out Action read, out View first, out Func<string?> check, app);
+        return Prompts.RunStudyDialog(app, dialog, status, read, () => check() ?? form.Build().Error, first);
     }
 
     /// <summary>The dialog's views, built without running it (the tests draw it headless).</summary>
-    public static Dialog Build(StartForm form, out Label status, out Action read, out View first)
+    public static Dialog Build(StartForm form, out Label status, out Action read, out View first) =>
+        Build(form, out status, out read, out first, out _, null);
+
+    /// <param name="check">Why the scenario row cannot be read (a typed name that is no scenario), or null.</param>
+    /// <param name="app">Runs the list of scenarios on F4 when they are too many to stand side by side.</param>
+    public static Dialog Build(StartForm form, out Label status, out Action read, out View first, out Func<string?> check, IApplication? app)
     {
         var dialog = new Dialog { Title = "Motor start", Width = Dim.Percent(90), Height = Dim.Percent(90) };
         var motorsLabel = new Label { X = 0, Y = 0, Text = "Start together (Space ticks):" };
@@ -32,15 +37,11 @@ public static class StartDialog
         var watchLabel = new Label { X = 0, Y = Pos.AnchorEnd(8), Text = "Watch buses" };
         var watch = new EntryField { X = 17, Y = Pos.AnchorEnd(8), Width = Dim.Fill(), Text = form.WatchText };
         var scenLabel = new Label { X = 0, Y = Pos.AnchorEnd(7), Text = "Scenario" };
-        var scenario = new OptionSelector
-        {
-            X = 17, Y = Pos.AnchorEnd(7), Width = Dim.Fill(), Orientation = Orientation.Horizontal,
-            Labels = form.ScenarioChoices.Select(Labels.Scenario).ToList(),
-            Value = Math.Max(0, form.ScenarioChoices.ToList().IndexOf(form.Scenario)),
-        };
+        var scenario = new OneOfRow(app, "scenario", form.ScenarioChoices.Select(Labels.Scenario).ToList(),
+            form.ScenarioChoices.ToList().IndexOf(form.Scenario), 17, Pos.AnchorEnd(7));
         var caution = new TextPane { X = 0, Y = Pos.AnchorEnd(6), Height = 4, CanFocus = false, Content = "Caution: " + Study.Core.Faults.FaultStudy.Caution };
         status = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Text = "Space ticks · Enter runs · Esc cancels" };
-        dialog.Add(motorsLabel, motors, minLabel, min, minHint, watchLabel, watch, scenLabel, scenario, caution, status);
+        dialog.Add([motorsLabel, motors, minLabel, min, minHint, watchLabel, watch, scenLabel, .. scenario.Views, caution, status]);
         read = () =>
         {
             form.Chosen.Clear();
@@ -48,8 +49,9 @@ public static class StartDialog
                 if (motors.Source?.IsMarked(i) == true) form.Chosen.Add(form.Motors[i].Id);
             form.MinTerminalText = min.Text;
             form.WatchText = watch.Text;
-            form.Scenario = form.ScenarioChoices[Math.Clamp(scenario.Value ?? 0, 0, form.ScenarioChoices.Count - 1)];
+            if (scenario.Index >= 0 && form.ScenarioChoices.Count > 0) form.Scenario = form.ScenarioChoices[scenario.Index];
         };
+        check = () => scenario.Error;
         first = motors;
         return dialog;
     }
