@@ -131,6 +131,18 @@ public sealed class FormAndResultTests
     }
 
     [Fact]
+    public void The_Detail_tab_names_a_finding_by_the_field_label_as_the_form_does()
+    {
+        Network n = DemoNetwork.Read();
+        Transformer t = n.Transformers.Single(x => x.Id == "CQ-T1");
+        n = ElementLists.Replace(n, ElementKind.Transformer, t.Id, t with { ZPercent = -8 });
+        string detail = ElementDetail.Describe(n, ElementKind.Transformer, t.Id);
+        string label = BranchFields.Transformer.Single(f => f.Key == "zPercent").Header;
+        Assert.Contains($"error: {label}:", detail);
+        Assert.DoesNotContain("zPercent", detail);
+    }
+
+    [Fact]
     public void Help_lists_every_command_key()
     {
         string help = HelpDialog.Text();

@@ -15,9 +15,10 @@ public static class ElementDetail
         IEnumerable<string> given = ElementFields.For(kind).Select(f => (f, v: f.Read(element)))
             .Where(x => x.v.Length > 0).Select(x => $"{x.f.Header} {x.v}");
         lines.Add("  " + string.Join(" · ", given));
-        IReadOnlyList<Problem> problems = NetworkValidator.ValidateElement(network, kind, id);
-        foreach (Problem p in problems)
-            lines.Add($"  {(p.IsError ? "error" : "warning")}: {(p.Field is null ? "" : p.Field + ": ")}{p.Message}");
+        // Findings in the form's words: each file key a field edits reads as that field's label.
+        FieldWords words = FieldWords.ForMessages(ElementFields.For(kind));
+        foreach (Problem p in NetworkValidator.ValidateElement(network, kind, id))
+            lines.Add($"  {(p.IsError ? "error" : "warning")}: {(p.Field is null ? "" : (words.LabelOf(p.Field) ?? p.Field) + ": ")}{words.Replace(p.Message)}");
         IReadOnlyList<string> preview = PerUnitPreview.Lines(network, kind, id);
         if (preview.Count > 0)
         {
