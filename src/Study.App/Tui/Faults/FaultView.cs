@@ -42,7 +42,6 @@ public sealed class FaultView : View
         notes.Height = Dim.Func(_ => NotesRows);
         Add(caution, summary, levels, breakers, notes);
         FocusSplit.Stack(this, levels, breakers, () => Room - NotesRows);
-        breakers.Height = Dim.Func(_ => Math.Max(0, Room - NotesRows - levels.Frame.Height));
         notes.HasFocusChanged += (_, _) => SetNeedsLayout();
         breakers.RowScheme = BreakerScheme;
     }

@@ -23,12 +23,13 @@ public static class FocusSplit
     /// <summary>The rows a view can use at most: a table its rows and header, anything else all of them.</summary>
     public static int Need(View view) => view is ResultTable t ? t.Source.Rows + 2 : int.MaxValue;
 
-    /// <param name="rows">The rows both share, worked out at layout time.</param>
+    /// <param name="rows">The rows both share, worked out at layout time (the bottom view ends where they end).</param>
     public static void Stack(View container, View top, View bottom, Func<int> rows)
     {
         top.Height = Dim.Func(_ => TopRows(rows(), bottom.HasFocus, Need(top), Need(bottom)));
         bottom.Y = Pos.Bottom(top);
-        bottom.Height = Dim.Fill();
+        // The bottom takes what is left of the shared rows, so a view may keep rows of its own below both.
+        bottom.Height = Dim.Func(_ => Math.Max(0, rows() - top.Frame.Height));
         Relayout(container, top, bottom);
     }
 
