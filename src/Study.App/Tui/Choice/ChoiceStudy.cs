@@ -2,7 +2,6 @@
 using Study.App.Tui.Editing;
 using Study.App.Tui.Shell;
 using Study.Core.Cases;
-using Study.Core.Faults;
 using Study.Core.Io;
 using Study.Core.Model;
 using Study.Core.Studies;
@@ -24,22 +23,13 @@ public static class ChoiceStudy
         Network snapshot = main.Session.Network;
         string? path = main.Session.Path;
         ResultStamp stamp = main.Now(scenarioMatters: question.Request.Scenarios.Count > 0);
-        main.Runner.Start("Bank choice", cancel =>
+        ResultStudy.Run(main, "Bank choice", ResultKind.BankChoice, main.Results.BankChoiceTab, stamp, cancel =>
             {
                 BankCandidates candidates = CandidatesFile.Read(question.CandidatesPath);
                 LoadProfile? profile = question.ProfilePath is { } p ? ProfileFile.Read(p) : null;
                 return StudyCase.Of(snapshot, path).Choose(question.Request, candidates, profile, cancel);
             },
-            result =>
-            {
-                main.Results.BankChoice.Show(result);
-                main.Stamp(ResultKind.BankChoice, stamp);
-                main.ShowStudyTab(main.Results.BankChoiceTab);
-            },
-            message =>
-            {
-                main.Fail(ResultKind.BankChoice, message);
-                Prompts.Tell(main.App, "Bank choice", message + "\n\n" + FaultStudy.Caution);
-            });
+            result => main.Results.BankChoice.Show(result),
+            caution: true);
     }
 }

@@ -23,24 +23,14 @@ public static class ProfileStudy
         var progress = new Progress<double>(f => fraction = f);
         int steps = StepCount(question.CsvPath);
         ResultStamp stamp = main.Now(scenarioMatters: false);
-        main.Runner.Start("Profile", cancel =>
+        ResultStudy.Run(main, "Profile", ResultKind.Profile, main.Results.ProfileTab, stamp, cancel =>
             {
                 LoadProfile profile = ProfileFile.Read(question.CsvPath, question.StepMinutes);
                 return StudyCase.Of(snapshot, path).Profile(question.Request, profile, progress, cancel);
             },
-            result =>
-            {
-                main.Results.Profile.Show(result, question.CsvPath);
-                main.Stamp(ResultKind.Profile, stamp);
-                main.ShowStudyTab(main.Results.ProfileTab);
-                if (result.StepsNotConverged > 0) main.Status.Message = $"{result.StepsNotConverged} of {result.Steps} steps did not converge";
-            },
-            message =>
-            {
-                main.Fail(ResultKind.Profile, message);
-                Prompts.Tell(main.App, "Load profile", message);
-            },
-            new ProgressMeter(() => fraction, steps, "steps"));
+            result => main.Results.Profile.Show(result, question.CsvPath),
+            note: result => result.StepsNotConverged > 0 ? $"{result.StepsNotConverged} of {result.Steps} steps did not converge" : null,
+            progress: new ProgressMeter(() => fraction, steps, "steps"));
     }
 
     /// <summary>The steps for the progress line: the file's rows after its header (the study reads it properly).</summary>

@@ -37,26 +37,14 @@ public sealed class StudyCommands(MainWindow main)
         ResultStamp stamp = main.Now();
         // The screen gives what it can: three-phase levels even where earth faults lack data, with the gaps listed.
         request = request with { Scenario = Session.ActiveScenario, LeaveOutEarthFaultsWithoutZeroSequence = true };
-        main.Runner.Start("Fault study", cancel => StudyCase.Of(snapshot, path).Fault(request, cancel),
-            result =>
-            {
-                if (result.Failure is { } failure)
-                {
-                    main.Fail(ResultKind.Fault, "fault study not run: " + failure);
-                    Prompts.Tell(App, "Fault study", "Fault study not run: " + failure + "\n\n" + FaultStudy.Caution);
-                    return;
-                }
-                main.Results.Faults.Show(result, snapshot);
-                main.Stamp(ResultKind.Fault, stamp);
-                main.ShowStudyTab(main.Results.FaultsTab);
-                if (result.LeftOut.Count > 0)
-                    main.Status.Message = $"earth faults not calculated: {result.MissingZeroSequence.Count} element(s) lack zero-sequence data (listed in the Faults tab)";
-            },
-            message =>
-            {
-                main.Fail(ResultKind.Fault, message);
-                Prompts.Tell(App, "Fault study", message + "\n\n" + FaultStudy.Caution);
-            });
+        ResultStudy.Run(main, "Fault study", ResultKind.Fault, main.Results.FaultsTab, stamp,
+            cancel => StudyCase.Of(snapshot, path).Fault(request, cancel),
+            result => main.Results.Faults.Show(result, snapshot),
+            refused: result => result.Failure,
+            note: result => result.LeftOut.Count > 0
+                ? $"earth faults not calculated: {result.MissingZeroSequence.Count} element(s) lack zero-sequence data (listed in the Faults tab)"
+                : null,
+            caution: true);
     }
 
     public void TapStudy()
@@ -73,20 +61,14 @@ public sealed class StudyCommands(MainWindow main)
         int scenarios = request.Scenarios.Count > 0 ? request.Scenarios.Count : Math.Max(1, snapshot.Scenarios.Count);
         // A study of every scenario does not depend on the one chosen; one of the active scenario does.
         ResultStamp stamp = main.Now(scenarioMatters: request.Scenarios.Count > 0);
-        main.Runner.Start("Tap study", cancel => StudyCase.Of(snapshot, path).Taps(request, progress, cancel),
+        ResultStudy.Run(main, "Tap study", ResultKind.Taps, main.Results.TapStudyTab, stamp,
+            cancel => StudyCase.Of(snapshot, path).Taps(request, progress, cancel),
             result =>
             {
                 LastTapSetting = new TapSetting(tap?.Winding ?? TapWinding.Hv, TapOf(Session.Network, id)?.Position, request.HoldOtherTaps);
                 main.Results.TapStudy.Show(result, LastTapSetting);
-                main.Stamp(ResultKind.Taps, stamp);
-                main.ShowStudyTab(main.Results.TapStudyTab);
             },
-            message =>
-            {
-                main.Fail(ResultKind.Taps, message);
-                Prompts.Tell(App, "Tap study", message);
-            },
-            new ProgressMeter(() => fraction, positions * scenarios, "positions"));
+            progress: new ProgressMeter(() => fraction, positions * scenarios, "positions"));
     }
 
     /// <summary>Each line and transformer out in turn, in the active scenario or all of them, on a snapshot.</summary>
@@ -100,20 +82,14 @@ public sealed class StudyCommands(MainWindow main)
         string? path = Session.Path;
         int outages = OutageElements.InService(snapshot).Count * (request.Scenarios.Count > 0 ? request.Scenarios.Count : Math.Max(1, snapshot.Scenarios.Count));
         ResultStamp stamp = main.Now(scenarioMatters: request.Scenarios.Count > 0);
-        main.Runner.Start("Outage screening", cancel => StudyCase.Of(snapshot, path).Outages(request, progress, cancel),
+        ResultStudy.Run(main, "Outage screening", ResultKind.Outages, main.Results.OutagesTab, stamp,
+            cancel => StudyCase.Of(snapshot, path).Outages(request, progress, cancel),
             result =>
             {
                 screened = snapshot;
                 main.Results.OutageResult = result;
-                main.Stamp(ResultKind.Outages, stamp);
-                main.ShowStudyTab(main.Results.OutagesTab);
             },
-            message =>
-            {
-                main.Fail(ResultKind.Outages, message);
-                Prompts.Tell(App, "Outage screening", message);
-            },
-            new ProgressMeter(() => fraction, outages, "outages"));
+            progress: new ProgressMeter(() => fraction, outages, "outages"));
     }
 
     private Network? screened;
@@ -143,23 +119,13 @@ public sealed class StudyCommands(MainWindow main)
         string beforeLabel = request.BeforePath is { } file ? $"{Path.GetFileName(file)}, {Labels.Scenario(request.BeforeScenario)}" : $"{here}, {Labels.Scenario(request.BeforeScenario)}";
         string afterLabel = $"{here}, {Labels.Scenario(request.AfterScenario)}";
         ResultStamp stamp = main.Now(scenarioMatters: false);
-        main.Runner.Start("Compare", cancel =>
+        ResultStudy.Run(main, "Compare", ResultKind.Compare, main.Results.CompareTab, stamp, cancel =>
             {
                 StudyCase after = StudyCase.Of(snapshot, path);
                 StudyCase before = request.BeforePath is { } f ? StudyCase.Open(f) : after;
                 return StudyCase.Compare(before, request.BeforeScenario, after, request.AfterScenario, cancel: cancel);
             },
-            result =>
-            {
-                main.Results.Comparison.Show(result, beforeLabel, afterLabel);
-                main.Stamp(ResultKind.Compare, stamp);
-                main.ShowStudyTab(main.Results.CompareTab);
-            },
-            message =>
-            {
-                main.Fail(ResultKind.Compare, message);
-                Prompts.Tell(App, "Compare", message);
-            });
+            result => main.Results.Comparison.Show(result, beforeLabel, afterLabel));
     }
 
     /// <summary>

@@ -1,7 +1,6 @@
 // The main screen's motor-start command: ask, run on a snapshot off the UI thread, show in the Start tab.
 using Study.App.Tui.Shell;
 using Study.Core.Cases;
-using Study.Core.Faults;
 using Study.Core.Model;
 
 namespace Study.App.Tui.Start;
@@ -27,23 +26,10 @@ public static class StartStudy
         string? path = main.Session.Path;
         // The scenario is the one chosen in the dialog, not the active one: changing the active one does not date it.
         ResultStamp stamp = main.Now(scenarioMatters: false);
-        main.Runner.Start("Motor start", cancel => StudyCase.Of(snapshot, path).Start(request, cancel),
-            result =>
-            {
-                if (result.Failure is { } failure)
-                {
-                    main.Fail(ResultKind.Start, "motor start not run: " + failure);
-                    Prompts.Tell(main.App, "Motor start", "Motor start not run: " + failure + "\n\n" + FaultStudy.Caution);
-                    return;
-                }
-                main.Results.Start.Result = result;
-                main.Stamp(ResultKind.Start, stamp);
-                main.ShowStudyTab(main.Results.StartTab);
-            },
-            message =>
-            {
-                main.Fail(ResultKind.Start, message);
-                Prompts.Tell(main.App, "Motor start", message + "\n\n" + FaultStudy.Caution);
-            });
+        ResultStudy.Run(main, "Motor start", ResultKind.Start, main.Results.StartTab, stamp,
+            cancel => StudyCase.Of(snapshot, path).Start(request, cancel),
+            result => main.Results.Start.Result = result,
+            refused: result => result.Failure,
+            caution: true);
     }
 }
